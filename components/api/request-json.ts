@@ -1,0 +1,45 @@
+import { ApiError } from './api-error';
+
+type ErrorBody = { error?: { code?: unknown; message?: unknown; field?: unknown } };
+
+function errorFromBody(status: number, body: unknown): ApiError {
+  const detail = (body as ErrorBody | null)?.error;
+  return new ApiError({
+    status,
+    code: typeof detail?.code === 'string' ? detail.code : `http:${status}`,
+    message:
+      typeof detail?.message === 'string'
+        ? detail.message
+        : `The server answered with status ${status}. Try again in a moment.`,
+    field: typeof detail?.field === 'string' ? detail.field : undefined,
+  });
+}
+
+/**
+ * GETs JSON from our API and throws an ApiError for anything but a 2xx answer.
+ * The caller names the expected shape; the API contract, not a runtime check, guarantees it.
+ */
+export async function requestJson<T>(url: string, signal?: AbortSignal): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(url, { headers: { accept: 'application/json' }, signal });
+  } catch (cause) {
+    if (signal?.aborted) throw cause;
+    throw new ApiError({
+      status: 0,
+      code: 'network',
+      message: 'Could not reach the server. Check the connection and try again.',
+    });
+  }
+
+  const body: unknown = await response.json().catch(() => null);
+  if (!response.ok) throw errorFromBody(response.status, body);
+  if (body === null) {
+    throw new ApiError({
+      status: response.status,
+      code: 'invalid_response',
+      message: 'The server sent a response that could not be read.',
+    });
+  }
+  return body as T;
+}

@@ -1,0 +1,31 @@
+import type { ReactNode } from 'react';
+import { SafetyNote } from './SafetyNote';
+import { ShellHeader } from './ShellHeader';
+
+type AppShellProps = {
+  userName: string;
+  children: ReactNode;
+};
+
+/** The frame around every signed-in page: header with workspace and account, caution in the footer. */
+export function AppShell({ userName, children }: AppShellProps) {
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a
+        href="#main"
+        className="sr-only rounded-md bg-paper-raised px-3 py-2 text-sm font-medium text-ink focus:not-sr-only focus:absolute focus:left-4 focus:top-2 focus:z-50"
+      >
+        Skip to content
+      </a>
+      <ShellHeader userName={userName} />
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8">
+        {children}
+      </main>
+      <footer className="border-t border-rule bg-paper-raised">
+        <div className="mx-auto max-w-6xl px-4 py-4 sm:px-6">
+          <SafetyNote />
+        </div>
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,36 @@
+'use client';
+
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+
+const links = [{ href: '/circuits', label: 'Circuits' }] as const;
+
+export function ShellNav() {
+  const pathname = usePathname();
+
+  return (
+    <nav aria-label="Main">
+      <ul className="flex flex-col gap-1 md:flex-row md:gap-2">
+        {links.map(({ href, label }) => {
+          const current = pathname === href || pathname.startsWith(`${href}/`);
+          return (
+            <li key={href}>
+              <Link
+                href={href}
+                aria-current={current ? 'page' : undefined}
+                className={[
+                  'block rounded-md px-3 py-1.5 text-sm font-medium',
+                  current
+                    ? 'bg-accent-soft text-accent-strong'
+                    : 'text-ink-soft hover:bg-paper-sunk hover:text-ink',
+                ].join(' ')}
+              >
+                {label}
+              </Link>
+            </li>
+          );
+        })}
+      </ul>
+    </nav>
+  );
+}

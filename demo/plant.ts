@@ -1,0 +1,38 @@
+import type { Role } from '@/models/roles';
+
+/**
+ * The demo workspace: a fictional plant and machine. Every name here is invented;
+ * the passwords are published in the README and are for local use only.
+ */
+export const DEMO_PASSWORD = 'harrowlane-demo';
+
+export const DEMO_WORKSPACE = { name: 'Harrow Lane Packaging Works — Lid press cell LP-2', slug: 'harrow-lane-lp2' };
+
+export const DEMO_USERS: ReadonlyArray<{ email: string; name: string; role: Role }> = [
+  { email: 'owner@harrowlane.example', name: 'Olwen Marsh', role: 'owner' },
+  { email: 'engineer@harrowlane.example', name: 'Emeka Lund', role: 'engineer' },
+  { email: 'reviewer@harrowlane.example', name: 'Rhea Castell', role: 'reviewer' },
+  { email: 'technician@harrowlane.example', name: 'Tobiah Wren', role: 'technician' },
+  { email: 'viewer@harrowlane.example', name: 'Vida Okafor', role: 'viewer' },
+];
+
+export const DEMO_CIRCUITS: ReadonlyArray<{ file: string; title: string; description: string; author: Role }> = [
+  {
+    file: 'lid-press-two-hand.json',
+    title: 'Lid press — two-hand start',
+    description: 'Two 3/2 push-button valves into a two-pressure valve pilot the 5/2 main valve; meter-out speed control on extension.',
+    author: 'engineer',
+  },
+  {
+    file: 'carton-clamp-sequence.json',
+    title: 'Carton clamp — pilot return by roller',
+    description: 'Start button pilots the clamp out; a roller valve at the end of stroke pilots it back.',
+    author: 'engineer',
+  },
+  {
+    file: 'reject-gate-quick-exhaust.json',
+    title: 'Reject gate — single-acting with quick exhaust',
+    description: 'Spring-return gate cylinder; a quick exhaust valve shortens the return stroke.',
+    author: 'owner',
+  },
+];

@@ -1,0 +1,27 @@
+import type { Role } from '@/models/roles';
+
+/**
+ * The one place that decides what a role may do. Route handlers, server actions
+ * and pages ask `can` (or `assertCan`); the UI may hide controls with the same
+ * answer, but the server is the gate.
+ */
+export const PERMISSIONS = {
+  'workspace:read': ['owner', 'engineer', 'reviewer', 'technician', 'viewer'],
+  'workspace:manage': ['owner'],
+  'member:manage': ['owner'],
+  'circuit:read': ['owner', 'engineer', 'reviewer', 'technician', 'viewer'],
+  'circuit:create': ['owner', 'engineer'],
+  'circuit:edit': ['owner', 'engineer'],
+  'circuit:delete': ['owner'],
+  'circuit:run': ['owner', 'engineer', 'reviewer', 'technician'],
+  'comment:create': ['owner', 'engineer', 'reviewer', 'technician'],
+  'review:request': ['owner', 'engineer'],
+  'review:decide': ['owner', 'reviewer'],
+  'upload:create': ['owner', 'engineer', 'technician'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Action = keyof typeof PERMISSIONS;
+
+export function can(role: Role, action: Action): boolean {
+  return (PERMISSIONS[action] as readonly Role[]).includes(role);
+}

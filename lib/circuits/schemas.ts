@@ -1,0 +1,24 @@
+import { z } from 'zod';
+import { circuitDocumentSchema } from '@/engine/document/schema';
+
+export const CIRCUIT_SORTS = ['title', 'updated', 'revisions', 'author'] as const;
+
+export const listCircuitsQuerySchema = z.object({
+  sort: z.enum(CIRCUIT_SORTS).default('updated'),
+  dir: z.enum(['asc', 'desc']).default('desc'),
+  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+});
+export type ListCircuitsQuery = z.infer<typeof listCircuitsQuerySchema>;
+
+export const createCircuitBodySchema = z
+  .object({
+    title: z.string().trim().min(1, 'a title is required').max(120, 'at most 120 characters'),
+    description: z.string().trim().max(2000, 'at most 2000 characters').default(''),
+    message: z.string().trim().max(500, 'at most 500 characters').default('First revision'),
+    document: circuitDocumentSchema.optional(),
+  })
+  .strict();
+export type CreateCircuitBody = z.infer<typeof createCircuitBodySchema>;
+
+export const circuitIdSchema = z.string().uuid('not a circuit id');

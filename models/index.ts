@@ -1,0 +1,39 @@
+import type { Sequelize } from 'sequelize';
+import { AuditEvent } from './audit-event';
+import { Circuit } from './circuit';
+import { CircuitRevision } from './circuit-revision';
+import { Comment } from './comment';
+import { Membership } from './membership';
+import { Run } from './run';
+import { Upload } from './upload';
+import { User } from './user';
+import { Workspace } from './workspace';
+
+export { AuditEvent, Circuit, CircuitRevision, Comment, Membership, Run, Upload, User, Workspace };
+export { ROLES, type Role } from './roles';
+
+let initialised: Sequelize | undefined;
+
+/** Initialises every model on one Sequelize instance and wires the associations. */
+export function initModels(sequelize: Sequelize): void {
+  if (initialised === sequelize) return;
+  initialised = sequelize;
+  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent]) {
+    model.initModel(sequelize);
+  }
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' });
+  Membership.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Workspace.hasMany(Circuit, { foreignKey: 'workspaceId', as: 'circuits' });
+  Circuit.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Circuit.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Circuit.hasMany(CircuitRevision, { foreignKey: 'circuitId', as: 'revisions' });
+  Circuit.belongsTo(CircuitRevision, { foreignKey: 'currentRevisionId', as: 'currentRevision', constraints: false });
+  CircuitRevision.belongsTo(Circuit, { foreignKey: 'circuitId', as: 'circuit' });
+  CircuitRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Comment.belongsTo(Circuit, { foreignKey: 'circuitId', as: 'circuit' });
+  Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Run.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
+  Upload.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+}

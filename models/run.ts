@@ -1,0 +1,38 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export const RUN_KINDS = ['live', 'scenario', 'proof', 'replay'] as const;
+export const RUN_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
+
+/** One simulation of one revision; the trace itself lives in object storage at traceKey. */
+export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run>> {
+  declare id: CreationOptional<string>;
+  declare revisionId: string;
+  declare kind: (typeof RUN_KINDS)[number];
+  declare status: (typeof RUN_STATUSES)[number];
+  declare inputs: unknown;
+  declare summary: unknown;
+  declare traceKey: string | null;
+  declare createdById: string;
+  declare finishedAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Run.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        revisionId: { type: DataTypes.UUID, allowNull: false },
+        kind: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...RUN_KINDS]] } },
+        status: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...RUN_STATUSES]] } },
+        inputs: { type: DataTypes.JSONB, allowNull: false },
+        summary: { type: DataTypes.JSONB, allowNull: true },
+        traceKey: { type: DataTypes.TEXT, allowNull: true },
+        createdById: { type: DataTypes.UUID, allowNull: false },
+        finishedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'runs', underscored: true },
+    );
+  }
+}

@@ -1,0 +1,23 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAttributes<Workspace>> {
+  declare id: CreationOptional<string>;
+  declare name: string;
+  /** URL-safe unique handle. */
+  declare slug: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Workspace.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        name: { type: DataTypes.TEXT, allowNull: false },
+        slug: { type: DataTypes.TEXT, allowNull: false, unique: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'workspaces', underscored: true },
+    );
+  }
+}
