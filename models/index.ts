@@ -3,13 +3,15 @@ import { AuditEvent } from './audit-event';
 import { Circuit } from './circuit';
 import { CircuitRevision } from './circuit-revision';
 import { Comment } from './comment';
+import { Invitation } from './invitation';
 import { Membership } from './membership';
+import { PasswordResetToken } from './password-reset-token';
 import { Run } from './run';
 import { Upload } from './upload';
 import { User } from './user';
 import { Workspace } from './workspace';
 
-export { AuditEvent, Circuit, CircuitRevision, Comment, Membership, Run, Upload, User, Workspace };
+export { AuditEvent, Circuit, CircuitRevision, Comment, Invitation, Membership, PasswordResetToken, Run, Upload, User, Workspace };
 export { ROLES, type Role } from './roles';
 
 let initialised: Sequelize | undefined;
@@ -18,7 +20,7 @@ let initialised: Sequelize | undefined;
 export function initModels(sequelize: Sequelize): void {
   if (initialised === sequelize) return;
   initialised = sequelize;
-  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent]) {
+  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken]) {
     model.initModel(sequelize);
   }
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
@@ -36,4 +38,6 @@ export function initModels(sequelize: Sequelize): void {
   Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
   Run.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
   Upload.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+  Invitation.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
 }

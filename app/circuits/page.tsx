@@ -1,25 +1,19 @@
 import type { Metadata } from 'next';
-import { getServerSession } from 'next-auth';
-import { redirect } from 'next/navigation';
-import { CircuitsHeading } from '@/components/circuits/CircuitsHeading';
-import { CircuitTable } from '@/components/circuits/CircuitTable';
+import { requireSession } from '@/components/auth/require-session';
+import { CircuitsView } from '@/components/circuits/CircuitsView';
 import { AppShell } from '@/components/shell/AppShell';
-import { authOptions } from '@/lib/auth/options';
+import { WorkspaceGate } from '@/components/workspace/WorkspaceGate';
 
 export const metadata: Metadata = { title: 'Circuits' };
 
 export default async function CircuitsPage() {
-  const session = await getServerSession(authOptions);
-  if (!session?.user) redirect('/sign-in?callbackUrl=/circuits');
-
-  const userName = session.user.name || session.user.email || 'Signed in';
+  const { displayName } = await requireSession('/circuits');
 
   return (
-    <AppShell userName={userName}>
-      <div className="space-y-6">
-        <CircuitsHeading />
-        <CircuitTable />
-      </div>
+    <AppShell userName={displayName}>
+      <WorkspaceGate>
+        <CircuitsView />
+      </WorkspaceGate>
     </AppShell>
   );
 }

@@ -15,16 +15,12 @@ function errorFromBody(status: number, body: unknown): ApiError {
   });
 }
 
-/**
- * GETs JSON from our API and throws an ApiError for anything but a 2xx answer.
- * The caller names the expected shape; the API contract, not a runtime check, guarantees it.
- */
-export async function requestJson<T>(url: string, signal?: AbortSignal): Promise<T> {
+async function fetchJson<T>(url: string, init: RequestInit, emptyAllowed: boolean): Promise<T> {
   let response: Response;
   try {
-    response = await fetch(url, { headers: { accept: 'application/json' }, signal });
+    response = await fetch(url, init);
   } catch (cause) {
-    if (signal?.aborted) throw cause;
+    if (init.signal?.aborted) throw cause;
     throw new ApiError({
       status: 0,
       code: 'network',
@@ -34,7 +30,7 @@ export async function requestJson<T>(url: string, signal?: AbortSignal): Promise
 
   const body: unknown = await response.json().catch(() => null);
   if (!response.ok) throw errorFromBody(response.status, body);
-  if (body === null) {
+  if (body === null && !emptyAllowed) {
     throw new ApiError({
       status: response.status,
       code: 'invalid_response',
@@ -42,4 +38,27 @@ export async function requestJson<T>(url: string, signal?: AbortSignal): Promise
     });
   }
   return body as T;
+}
+
+/**
+ * GETs JSON from our API and throws an ApiError for anything but a 2xx answer.
+ * The caller names the expected shape; the API contract, not a runtime check, guarantees it.
+ */
+export function requestJson<T>(url: string, signal?: AbortSignal): Promise<T> {
+  return fetchJson<T>(url, { headers: { accept: 'application/json' }, signal }, false);
+}
+
+/**
+ * Sends a change to our API with an optional JSON body; errors as for requestJson.
+ * Some changes answer with no body, which resolves to null, so such callers name `T` as `unknown`.
+ */
+export function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: string, body?: unknown): Promise<T> {
+  return fetchJson<T>(url, {
+    method,
+    headers:
+      body === undefined
+        ? { accept: 'application/json' }
+        : { accept: 'application/json', 'content-type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  }, true);
 }

@@ -2,11 +2,17 @@
 
 import Link from 'next/link';
 import { usePathname } from 'next/navigation';
-
-const links = [{ href: '/circuits', label: 'Circuits' }] as const;
+import { useCan } from '@/components/workspace/use-current-workspace';
 
 export function ShellNav() {
   const pathname = usePathname();
+  const canReadMailbox = useCan('mailbox:read');
+
+  const links = [
+    { href: '/circuits', label: 'Circuits' },
+    { href: '/workspace/members', label: 'Members' },
+    ...(canReadMailbox ? [{ href: '/mailbox', label: 'Mailbox' }] : []),
+  ];
 
   return (
     <nav aria-label="Main">

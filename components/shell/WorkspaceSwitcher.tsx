@@ -1,19 +1,37 @@
 'use client';
 
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import Link from 'next/link';
+import { useRouter } from 'next/navigation';
 import { useEffect, useId, useRef, useState } from 'react';
-import { useCurrentWorkspace } from '@/components/workspace/use-current-workspace';
+import { sendJson } from '@/components/api/request-json';
+import {
+  isWithoutWorkspace,
+  useCurrentWorkspace,
+} from '@/components/workspace/use-current-workspace';
+import { useWorkspaces } from '@/components/workspace/use-workspaces';
+import { WorkspaceOption } from './WorkspaceOption';
 
-/**
- * Shows the workspace the user is working in. Every account has exactly one workspace
- * for now, so the switch itself is present but disabled until accounts can join several.
- */
+/** Names the workspace being worked in and moves the user to another one they belong to. */
 export function WorkspaceSwitcher() {
-  const { data, isError } = useCurrentWorkspace();
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const current = useCurrentWorkspace();
   const [open, setOpen] = useState(false);
+  const workspaces = useWorkspaces(open);
   const rootRef = useRef<HTMLDivElement>(null);
   const buttonRef = useRef<HTMLButtonElement>(null);
   const panelId = useId();
-  const noteId = useId();
+
+  const switchTo = useMutation({
+    mutationFn: (workspaceId: string) => sendJson('POST', '/api/workspaces/switch', { workspaceId }),
+    onSuccess: () => {
+      setOpen(false);
+      // Everything cached was read in the old workspace; drop it rather than show it under the new name.
+      void queryClient.resetQueries();
+      router.refresh();
+    },
+  });
 
   useEffect(() => {
     if (!open) return;
@@ -33,7 +51,10 @@ export function WorkspaceSwitcher() {
     };
   }, [open]);
 
-  const name = data?.workspace.name ?? (isError ? 'Workspace unavailable' : 'Loading…');
+  const { data } = current;
+  const name =
+    data?.workspace.name ??
+    (isWithoutWorkspace(current.error) ? 'No workspace' : current.isError ? 'Workspace unavailable' : 'Loading…');
 
   return (
     <div ref={rootRef} className="relative">
@@ -65,27 +86,41 @@ export function WorkspaceSwitcher() {
       <div
         id={panelId}
         hidden={!open}
-        className="z-20 mt-1 w-full rounded-md border border-rule bg-paper-raised p-3 shadow-lg md:absolute md:left-0 md:w-72"
+        className="z-20 mt-1 w-full rounded-md border border-rule bg-paper-raised p-2 shadow-lg md:absolute md:left-0 md:w-80"
       >
-        <p className="text-xs font-medium uppercase tracking-wide text-ink-soft">Current workspace</p>
-        <p className="mt-1 font-medium text-ink">{name}</p>
-        {data ? (
-          <p className="mt-0.5 text-sm text-ink-soft">
-            Your role: <span className="tag">{data.role}</span>
+        <p className="px-2 pt-1 text-xs font-medium uppercase tracking-wide text-ink-soft">Your workspaces</p>
+        {workspaces.data ? (
+          <ul className="mt-1 space-y-0.5" aria-busy={switchTo.isPending}>
+            {workspaces.data.workspaces.map((workspace) => (
+              <li key={workspace.id}>
+                <WorkspaceOption
+                  workspace={workspace}
+                  switching={switchTo.isPending && switchTo.variables === workspace.id}
+                  disabled={switchTo.isPending}
+                  onChoose={() => (workspace.active ? setOpen(false) : switchTo.mutate(workspace.id))}
+                />
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p className="px-2 py-2 text-sm text-ink-soft">
+            {workspaces.isError ? workspaces.error.message : 'Loading workspaces…'}
+          </p>
+        )}
+        {switchTo.isError ? (
+          <p role="alert" className="px-2 py-1 text-sm text-danger">
+            {switchTo.error.message}
           </p>
         ) : null}
-        <div className="mt-3 border-t border-rule pt-3">
-          <button
-            type="button"
-            disabled
-            aria-describedby={noteId}
-            className="w-full cursor-not-allowed rounded-md border border-rule bg-paper-sunk px-3 py-1.5 text-left text-sm text-ink-soft"
+        <div className="mt-2 border-t border-rule pt-2">
+          <Link
+            href="/workspaces/new"
+            onClick={() => setOpen(false)}
+            className="block rounded-md px-2 py-1.5 text-sm font-medium text-accent-strong hover:bg-paper-sunk"
+            data-testid="workspace-new"
           >
-            Switch workspace
-          </button>
-          <p id={noteId} className="mt-2 text-xs text-ink-soft">
-            Switching between workspaces arrives with accounts.
-          </p>
+            New workspace…
+          </Link>
         </div>
       </div>
     </div>

@@ -1,4 +1,4 @@
-export type ButtonVariant = 'primary' | 'secondary' | 'quiet';
+export type ButtonVariant = 'primary' | 'secondary' | 'quiet' | 'danger';
 export type ButtonSize = 'sm' | 'md';
 
 const base =
@@ -9,6 +9,7 @@ const variants: Record<ButtonVariant, string> = {
   primary: 'border-accent bg-accent text-white hover:border-accent-strong hover:bg-accent-strong',
   secondary: 'border-rule bg-paper-raised text-ink hover:border-ink-faint hover:bg-paper-sunk',
   quiet: 'border-transparent bg-transparent text-ink-soft hover:bg-paper-sunk hover:text-ink',
+  danger: 'border-danger bg-danger text-white hover:bg-danger/85',
 };
 
 const sizes: Record<ButtonSize, string> = {

@@ -17,10 +17,15 @@ export interface Actor {
   role: Role;
 }
 
-/** The signed-in user id from the request's session cookie, or an `unauthorized:session` error. */
-export async function requireUserId(request: NextRequest): Promise<string> {
+/** The signed-in user id from the request's session cookie, if there is a valid one. */
+export async function sessionUserId(request: NextRequest): Promise<string | undefined> {
   const token = await getToken({ req: request, secret: process.env.NEXTAUTH_SECRET });
-  const userId = typeof token?.sub === 'string' ? token.sub : undefined;
+  return typeof token?.sub === 'string' ? token.sub : undefined;
+}
+
+/** The signed-in user id, or an `unauthorized:session` error. */
+export async function requireUserId(request: NextRequest): Promise<string> {
+  const userId = await sessionUserId(request);
   if (!userId) throw new AppError('unauthorized', 'session', 'Sign in to continue');
   return userId;
 }

@@ -8,7 +8,9 @@ import type { Role } from '@/models/roles';
 export const PERMISSIONS = {
   'workspace:read': ['owner', 'engineer', 'reviewer', 'technician', 'viewer'],
   'workspace:manage': ['owner'],
+  'member:read': ['owner', 'engineer', 'reviewer', 'technician', 'viewer'],
   'member:manage': ['owner'],
+  'mailbox:read': ['owner'],
   'circuit:read': ['owner', 'engineer', 'reviewer', 'technician', 'viewer'],
   'circuit:create': ['owner', 'engineer'],
   'circuit:edit': ['owner', 'engineer'],
@@ -24,4 +26,9 @@ export type Action = keyof typeof PERMISSIONS;
 
 export function can(role: Role, action: Action): boolean {
   return (PERMISSIONS[action] as readonly Role[]).includes(role);
+}
+
+/** Every action the role may take, for the UI to hide what it cannot do. */
+export function permissionsOf(role: Role): Action[] {
+  return (Object.keys(PERMISSIONS) as Action[]).filter((action) => can(role, action));
 }

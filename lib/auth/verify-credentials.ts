@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';
 import { verifyPassword } from '@/lib/auth/password';
+import { signInLimiter, type SignInLimiter } from '@/lib/auth/rate-limit';
 import { recordAudit } from '@/lib/audit';
 import { User } from '@/models';
 
@@ -15,17 +16,28 @@ export interface SignedInUser {
   name: string;
 }
 
-/** Checks an e-mail and password; returns the user or null. Never logs the password. */
-export async function verifyCredentials(input: unknown): Promise<SignedInUser | null> {
+/**
+ * Checks an e-mail and password; returns the user or null. Refuses with
+ * `rate_limited:sign_in` once the account or the address has used up its attempts,
+ * even when the password is right. Never logs the password.
+ */
+export async function verifyCredentials(
+  input: unknown,
+  { address = 'unknown', limiter = signInLimiter() }: { address?: string; limiter?: SignInLimiter } = {},
+): Promise<SignedInUser | null> {
   const parsed = credentialsSchema.safeParse(input);
   if (!parsed.success) return null;
+  const { email, password } = parsed.data;
   getSequelize();
-  const user = await User.findOne({ where: { email: parsed.data.email } });
-  const ok = user ? await verifyPassword(parsed.data.password, user.passwordHash) : false;
+  await limiter.assertAllowed({ email, address });
+  const user = await User.findOne({ where: { email } });
+  const ok = user ? await verifyPassword(password, user.passwordHash) : false;
   if (!user || !ok) {
-    await recordAudit({ action: 'auth.sign_in_failed', actorId: user?.id ?? null, data: { email: parsed.data.email } });
+    await limiter.recordFailure({ email, address });
+    await recordAudit({ action: 'auth.sign_in_failed', actorId: user?.id ?? null, data: { email, address } });
     return null;
   }
-  await recordAudit({ action: 'auth.signed_in', actorId: user.id });
+  await limiter.recordSuccess({ email });
+  await recordAudit({ action: 'auth.signed_in', actorId: user.id, data: { address } });
   return { id: user.id, email: user.email, name: user.name };
 }

@@ -38,7 +38,7 @@ export async function apiRequest(
   { userId, method = 'GET', body, headers = {} }: { userId?: string; method?: string; body?: string | object; headers?: Record<string, string> } = {},
 ): Promise<NextRequest> {
   const allHeaders: Record<string, string> = { ...headers };
-  if (userId) allHeaders.cookie = await sessionCookie(userId);
+  if (userId) allHeaders.cookie = [await sessionCookie(userId), headers.cookie].filter(Boolean).join('; ');
   if (body !== undefined) allHeaders['content-type'] = 'application/json';
   return new NextRequest(new URL(path, 'http://localhost:3000'), {
     method,

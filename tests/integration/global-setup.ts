@@ -1,11 +1,34 @@
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { createMigrator } from '@/lib/migrator';
+import { startMailCatcher, type MailCatcher } from '@/scripts/local/mail-catcher';
 
-/** Brings the test database (DATABASE_URL from `npm test`) to the newest schema once per run. */
-export default async function setup(): Promise<void> {
+const TEST_SMTP_URL = 'smtp://127.0.0.1:2625';
+const TEST_MAILBOX_URL = 'http://127.0.0.1:2680';
+
+/**
+ * Brings the test database (DATABASE_URL from `npm test`) to the newest schema and
+ * starts the local mail catcher, once per run.
+ */
+export default async function setup(): Promise<() => Promise<void>> {
   if (!process.env.DATABASE_URL) {
     throw new Error('DATABASE_URL is not set: run integration tests through `npm test`, which starts the test database');
   }
   await createMigrator(getSequelize()).up();
   await closeSequelize();
+
+  process.env.SMTP_URL ??= TEST_SMTP_URL;
+  process.env.MAILBOX_URL ??= TEST_MAILBOX_URL;
+  const directory = await mkdtemp(path.join(os.tmpdir(), 'airproof-mail-'));
+  const catcher: MailCatcher = await startMailCatcher({
+    smtpPort: Number(new URL(process.env.SMTP_URL).port),
+    httpPort: Number(new URL(process.env.MAILBOX_URL).port),
+    directory,
+  });
+  return async () => {
+    await catcher.close();
+    await rm(directory, { recursive: true, force: true });
+  };
 }

@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { authorizeRequest } from '@/lib/auth/actor';
+import { permissionsOf } from '@/lib/auth/policy';
 import { route } from '@/lib/http/respond';
 
 export const runtime = 'nodejs';
@@ -7,5 +8,5 @@ export const dynamic = 'force-dynamic';
 
 export const GET = route(async (request: NextRequest) => {
   const actor = await authorizeRequest(request, 'workspace:read');
-  return NextResponse.json({ workspace: { id: actor.workspaceId, name: actor.workspaceName }, role: actor.role });
+  return NextResponse.json({ workspace: { id: actor.workspaceId, name: actor.workspaceName }, role: actor.role, permissions: permissionsOf(actor.role) });
 });

@@ -1,0 +1,150 @@
+import { randomUUID } from 'node:crypto';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import path from 'node:path';
+import type { NextRequest } from 'next/server';
+import { beforeAll, describe, expect, it } from 'vitest';
+import * as passwordResetConfirm from '@/app/api/account/password-reset/confirm/route';
+import * as passwordResetRequest from '@/app/api/account/password-reset/request/route';
+import * as signUp from '@/app/api/account/sign-up/route';
+import * as circuitOne from '@/app/api/circuits/[id]/route';
+import * as circuits from '@/app/api/circuits/route';
+import * as health from '@/app/api/health/route';
+import * as invitationAccept from '@/app/api/invitations/accept/route';
+import * as invitationLookup from '@/app/api/invitations/lookup/route';
+import * as mailbox from '@/app/api/mailbox/route';
+import * as invitationOne from '@/app/api/workspaces/current/invitations/[id]/route';
+import * as invitationsRoute from '@/app/api/workspaces/current/invitations/route';
+import * as memberOne from '@/app/api/workspaces/current/members/[userId]/route';
+import * as members from '@/app/api/workspaces/current/members/route';
+import * as current from '@/app/api/workspaces/current/route';
+import * as workspaces from '@/app/api/workspaces/route';
+import * as switchWorkspace from '@/app/api/workspaces/switch/route';
+import { newToken } from '@/lib/auth/tokens';
+import { createCircuit } from '@/lib/circuits/create-circuit';
+import { Invitation, PasswordResetToken } from '@/models';
+import { apiRequest, createTestWorkspace, type TestWorkspace } from '../fixtures';
+
+/**
+ * The role-permission table: every route handler, every kind of caller, the status
+ * expected. Each cell runs against a fresh workspace so that writes don't interfere.
+ * Later issues add their routes here; the coverage check below fails until they do.
+ */
+const ACTORS = ['signed_out', 'viewer', 'technician', 'reviewer', 'engineer', 'other_owner', 'owner'] as const;
+type ActorKind = (typeof ACTORS)[number];
+
+interface World {
+  ws: TestWorkspace;
+  other: TestWorkspace;
+  circuitId: string;
+  invitationId: string;
+  invitationToken: string;
+  resetToken: string;
+}
+
+type Handler = (request: NextRequest, context: never) => Promise<Response>;
+
+interface RouteCase {
+  route: string;
+  handler: Handler;
+  path: (w: World) => string;
+  body?: (w: World) => object;
+  params?: (w: World) => Record<string, string>;
+  expect: Record<ActorKind, number>;
+}
+
+const row = (...s: [number, number, number, number, number, number, number]): Record<ActorKind, number> =>
+  Object.fromEntries(ACTORS.map((a, i) => [a, s[i]])) as Record<ActorKind, number>;
+const fresh = () => `cell-${randomUUID().slice(0, 8)}@test.example`;
+
+//                                 signed_out viewer tech reviewer engineer other_owner owner
+const TABLE: RouteCase[] = [
+  { route: 'GET /api/health', handler: health.GET as Handler, path: () => '/api/health', expect: row(200, 200, 200, 200, 200, 200, 200) },
+  { route: 'GET /api/circuits', handler: circuits.GET, path: () => '/api/circuits', expect: row(401, 200, 200, 200, 200, 200, 200) },
+  { route: 'POST /api/circuits', handler: circuits.POST, path: () => '/api/circuits', body: () => ({ title: 'Table cell' }), expect: row(401, 403, 403, 403, 201, 201, 201) },
+  { route: 'GET /api/circuits/[id]', handler: circuitOne.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/workspaces', handler: workspaces.GET, path: () => '/api/workspaces', expect: row(401, 200, 200, 200, 200, 200, 200) },
+  { route: 'POST /api/workspaces', handler: workspaces.POST, path: () => '/api/workspaces', body: () => ({ name: 'Cell workspace' }), expect: row(401, 201, 201, 201, 201, 201, 201) },
+  { route: 'POST /api/workspaces/switch', handler: switchWorkspace.POST, path: () => '/api/workspaces/switch', body: (w) => ({ workspaceId: w.ws.workspaceId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/workspaces/current', handler: current.GET, path: () => '/api/workspaces/current', expect: row(401, 200, 200, 200, 200, 200, 200) },
+  { route: 'GET /api/workspaces/current/members', handler: members.GET, path: () => '/api/workspaces/current/members', expect: row(401, 200, 200, 200, 200, 200, 200) },
+  { route: 'PATCH /api/workspaces/current/members/[userId]', handler: memberOne.PATCH as Handler, path: (w) => `/api/workspaces/current/members/${w.ws.users.engineer.id}`, params: (w) => ({ userId: w.ws.users.engineer.id }), body: () => ({ role: 'reviewer' }), expect: row(401, 403, 403, 403, 403, 404, 200) },
+  { route: 'DELETE /api/workspaces/current/members/[userId]', handler: memberOne.DELETE as Handler, path: (w) => `/api/workspaces/current/members/${w.ws.users.viewer.id}`, params: (w) => ({ userId: w.ws.users.viewer.id }), expect: row(401, 403, 403, 403, 403, 404, 200) },
+  { route: 'GET /api/workspaces/current/invitations', handler: invitationsRoute.GET, path: () => '/api/workspaces/current/invitations', expect: row(401, 403, 403, 403, 403, 200, 200) },
+  { route: 'POST /api/workspaces/current/invitations', handler: invitationsRoute.POST, path: () => '/api/workspaces/current/invitations', body: () => ({ email: fresh(), role: 'reviewer' }), expect: row(401, 403, 403, 403, 403, 201, 201) },
+  { route: 'DELETE /api/workspaces/current/invitations/[id]', handler: invitationOne.DELETE as Handler, path: (w) => `/api/workspaces/current/invitations/${w.invitationId}`, params: (w) => ({ id: w.invitationId }), expect: row(401, 403, 403, 403, 403, 404, 200) },
+  // Token-authorised: holding the e-mailed link is the permission.
+  { route: 'GET /api/invitations/lookup', handler: invitationLookup.GET, path: (w) => `/api/invitations/lookup?token=${w.invitationToken}`, expect: row(200, 200, 200, 200, 200, 200, 200) },
+  { route: 'POST /api/invitations/accept', handler: invitationAccept.POST, path: () => '/api/invitations/accept', body: (w) => ({ token: w.invitationToken, name: 'Cell Invitee', password: 'cell-invitee-pass' }), expect: row(200, 200, 200, 200, 200, 200, 200) },
+  { route: 'POST /api/account/sign-up', handler: signUp.POST, path: () => '/api/account/sign-up', body: () => ({ name: 'Cell', email: fresh(), password: 'cell-signup-pass' }), expect: row(201, 201, 201, 201, 201, 201, 201) },
+  { route: 'POST /api/account/password-reset/request', handler: passwordResetRequest.POST, path: () => '/api/account/password-reset/request', body: (w) => ({ email: w.ws.users.viewer.email }), expect: row(202, 202, 202, 202, 202, 202, 202) },
+  { route: 'POST /api/account/password-reset/confirm', handler: passwordResetConfirm.POST, path: () => '/api/account/password-reset/confirm', body: (w) => ({ token: w.resetToken, password: 'cell-reset-pass-1' }), expect: row(200, 200, 200, 200, 200, 200, 200) },
+  { route: 'GET /api/mailbox', handler: mailbox.GET, path: () => '/api/mailbox', expect: row(401, 403, 403, 403, 403, 200, 200) },
+];
+
+/** Routes served by next-auth itself; they need Next's request scope, so e2e/auth-endpoints.spec.ts checks them. */
+const COVERED_BY_E2E = ['GET /api/auth/[...nextauth]', 'POST /api/auth/[...nextauth]'];
+
+async function makeWorld(): Promise<World> {
+  const ws = await createTestWorkspace('perm');
+  const other = await createTestWorkspace('perm-other');
+  const circuit = await createCircuit({ workspaceId: ws.workspaceId, authorId: ws.users.engineer.id, input: { title: 'Permission target', description: '', message: '' } });
+  const invitation = newToken();
+  const inv = await Invitation.create({
+    workspaceId: ws.workspaceId,
+    email: fresh(),
+    role: 'reviewer',
+    tokenHash: invitation.hash,
+    invitedById: ws.users.owner.id,
+    expiresAt: new Date(Date.now() + 86_400_000),
+  });
+  const reset = newToken();
+  await PasswordResetToken.create({ userId: ws.users.technician.id, tokenHash: reset.hash, expiresAt: new Date(Date.now() + 3_600_000) });
+  return { ws, other, circuitId: circuit.id, invitationId: inv.id, invitationToken: invitation.token, resetToken: reset.token };
+}
+
+function userFor(kind: ActorKind, w: World): string | undefined {
+  if (kind === 'signed_out') return undefined;
+  if (kind === 'other_owner') return w.other.users.owner.id;
+  return w.ws.users[kind].id;
+}
+
+function listRouteFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((entry) => {
+    const full = path.join(dir, entry);
+    if (statSync(full).isDirectory()) return listRouteFiles(full);
+    return entry === 'route.ts' ? [full] : [];
+  });
+}
+
+describe('role-permission table', () => {
+  it('lists every route handler that exists', () => {
+    const apiDir = path.join(process.cwd(), 'app', 'api');
+    const existing = listRouteFiles(apiDir).flatMap((file) => {
+      const source = readFileSync(file, 'utf8');
+      const route = `/api/${path.relative(apiDir, path.dirname(file)).split(path.sep).join('/')}`;
+      const methods = [...source.matchAll(/export (?:const|async function) (GET|POST|PUT|PATCH|DELETE)\b/g), ...source.matchAll(/as (GET|POST|PUT|PATCH|DELETE)\b/g)].map((m) => m[1]);
+      return methods.map((method) => `${method} ${route}`);
+    });
+    expect([...TABLE.map((c) => c.route), ...COVERED_BY_E2E].sort()).toEqual([...new Set(existing)].sort());
+  });
+
+  for (const routeCase of TABLE) {
+    describe(routeCase.route, () => {
+      for (const kind of ACTORS) {
+        let world: World;
+        beforeAll(async () => {
+          world = await makeWorld();
+        });
+        it(`${kind} → ${routeCase.expect[kind]}`, async () => {
+          const [method] = routeCase.route.split(' ');
+          const request = await apiRequest(routeCase.path(world), { userId: userFor(kind, world), method, body: routeCase.body?.(world) });
+          const context = { params: Promise.resolve(routeCase.params?.(world) ?? {}) } as never;
+          const response = await routeCase.handler(request, context);
+          const text = await response.text();
+          expect(response.status, text).toBe(routeCase.expect[kind]);
+          if (response.status >= 400) expect(JSON.parse(text)).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
+        });
+      }
+    });
+  }
+});
