@@ -29,4 +29,9 @@ test('next-auth endpoints answer signed out and signed in', async ({ page }) => 
   const signedIn = await page.request.get('/api/auth/session');
   expect(signedIn.status()).toBe(200);
   expect(await signedIn.json()).toMatchObject({ user: { email: demoUser('reviewer').email } });
+
+  await page.goto('/sign-out');
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  await expect(page).toHaveURL(/\/$/);
+  expect(await (await page.request.get('/api/auth/session')).json()).toEqual({});
 });

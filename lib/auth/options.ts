@@ -12,7 +12,7 @@ function clientAddress(headers: Record<string, unknown> | undefined): string {
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: 'jwt', maxAge: 12 * 60 * 60 },
-  pages: { signIn: '/sign-in' },
+  pages: { signIn: '/sign-in', signOut: '/sign-out' },
   providers: [
     CredentialsProvider({
       id: 'credentials',
