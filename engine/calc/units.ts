@@ -3,11 +3,13 @@
  * Pressures inside the engine are absolute pascals; the UI speaks bar gauge.
  */
 
+import { STANDARD_ATMOSPHERE_PA } from './constants';
+
 /** 1 bar in pascals (exact). */
 export const PA_PER_BAR = 100_000;
 
-/** Standard atmosphere, Pa (exact, 10th CGPM 1954); the default ambient pressure. */
-export const STANDARD_ATMOSPHERE_PA = 101_325;
+/** Standard atmosphere, Pa (exact, 10th CGPM 1954); the default ambient pressure. Defined in constants.ts. */
+export { STANDARD_ATMOSPHERE_PA };
 
 /** Converts a gauge reading in bar to absolute pascals at the given ambient pressure. */
 export function barGaugeToPaAbs(barGauge: number, ambientPa: number = STANDARD_ATMOSPHERE_PA): number {

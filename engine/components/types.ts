@@ -1,0 +1,180 @@
+/**
+ * The contract between a component type (one file in this folder) and the solver.
+ * A type declares its ports and parameters as data, and builds its runtime
+ * behaviour from a small set of solver primitives (nodes, restrictions, pistons,
+ * guards, timers). Units are SI: pressures in Pa, lengths in m, times in s.
+ */
+
+export const CATEGORIES = ['supply', 'input', 'logic', 'final-valve', 'actuator', 'measurement'] as const;
+export type Category = (typeof CATEGORIES)[number];
+
+/** Physical meaning of a number parameter; the UI converts and labels by it. */
+export type Quantity =
+  | 'pressure-gauge' // Pa above ambient (set points)
+  | 'pressure-difference' // Pa (cracking, hysteresis)
+  | 'length' // m
+  | 'volume' // m³
+  | 'time' // s
+  | 'mass' // kg
+  | 'force' // N
+  | 'damping' // N·s/m
+  | 'conductance' // m³/(s·Pa), ISO 6358 sonic conductance C
+  | 'ratio' // dimensionless (critical ratio b, polytropic exponent)
+  | 'fraction' // 0..1 (throttle opening)
+  | 'volume-flow-anr' // m³/s at ISO 8778 reference atmosphere
+  | 'angle'; // rad
+
+export type ParameterSpec =
+  | { kind: 'number'; quantity: Quantity; label: string; default: number; min: number; max: number; description?: string }
+  | { kind: 'choice'; label: string; options: readonly string[]; default: string; description?: string }
+  | { kind: 'flag'; label: string; default: boolean; description?: string };
+
+export type PortRole = 'supply' | 'working' | 'exhaust' | 'pilot' | 'signal';
+
+export interface PortSpec {
+  /** Port number as ISO 11727 / ISO 5599-3 give it ("1", "2", "14"), or a letter where the trade uses one. */
+  id: string;
+  role: PortRole;
+  /** Shown beside the port; defaults to the id. */
+  label?: string;
+}
+
+export type ParameterValues = Readonly<Record<string, number | string | boolean>>;
+
+/** Handles handed out by the build context. */
+export type NodeRef = { readonly node: number };
+export type RestrictionRef = { readonly restriction: number };
+export type PistonRef = { readonly piston: number };
+
+export interface RestrictionSpec {
+  name: string;
+  from: NodeRef;
+  to: NodeRef;
+  /** ISO 6358 sonic conductance C, m³/(s·Pa). */
+  conductance: number;
+  /** ISO 6358 critical pressure ratio b. */
+  criticalRatio: number;
+  /** Only from → to (a check valve) when true. */
+  oneWay?: boolean;
+  /** For one-way passages: pressure difference needed to open, Pa. */
+  crackingPa?: number;
+  /** Opening 0..1 at start. */
+  opening?: number;
+  /**
+   * Continuous opening as a function of one node's pressure (regulators).
+   * Returns the opening and its derivative with respect to that pressure.
+   */
+  modulator?: { control: NodeRef; fn: (pressurePa: number) => { k: number; dk: number } };
+}
+
+export interface PistonSpec {
+  name: string;
+  /** Chamber whose gas pushes towards extension (cap side). */
+  capNode: NodeRef;
+  /** Effective area on the cap side, m². */
+  capArea: number;
+  /** Chamber on the rod side, or null when that side is open to atmosphere. */
+  rodNode: NodeRef | null;
+  rodSideArea: number;
+  /** Area that sees ambient pressure against extension (rod cross-section on a single-rod cylinder), m². */
+  ambientArea: number;
+  strokeM: number;
+  deadVolumeCapM3: number;
+  deadVolumeRodM3: number;
+  movingMassKg: number;
+  /** External load opposing extension, N (negative pulls). */
+  loadN: number;
+  coulombN: number;
+  breakawayN: number;
+  viscousNsPerM: number;
+  /** Spring force at x = 0 and rate, pushing towards retraction (single-acting). */
+  springPreloadN: number;
+  springRateNPerM: number;
+  startPositionM: number;
+}
+
+/** What a behaviour can read and do while the simulation runs. */
+export interface RuntimeApi {
+  readonly time: number;
+  pressure(node: NodeRef): number;
+  ambientPa(): number;
+  position(piston: PistonRef): number;
+  velocity(piston: PistonRef): number;
+  setOpening(restriction: RestrictionRef, opening: number): void;
+  setFixedPressure(node: NodeRef, pressurePa: number): void;
+  /** Calls onTimer(tag) after delay seconds (delay ≥ 0). */
+  schedule(delayS: number, tag: string): void;
+  cancel(tag: string): void;
+  event(kind: string, detail?: string): void;
+}
+
+export type InputAction = 'press' | 'release' | 'toggle' | 'set';
+
+export interface InputCommand {
+  action: InputAction;
+  parameter?: string;
+  value?: number;
+}
+
+/** The running behaviour of one placed component. All methods are optional. */
+export interface Behaviour {
+  /** Continuous functions of the state whose zero crossings are events (located in time). */
+  guards?(api: RuntimeApi): number[];
+  onGuard?(index: number, rising: boolean, api: RuntimeApi): void;
+  onTimer?(tag: string, api: RuntimeApi): void;
+  onInput?(command: InputCommand, api: RuntimeApi): void;
+  /** Runs once at t = 0 after every component is built. */
+  start?(api: RuntimeApi): void;
+  /** Discrete signals for the trace (valve position index, actuated flags). */
+  signals?(): Record<string, number>;
+}
+
+export interface ActuationLink {
+  piston: PistonRef;
+  positionM: number;
+}
+
+export interface BuildContext {
+  readonly componentId: string;
+  readonly tag: string;
+  readonly parameters: ParameterValues;
+  num(name: string): number;
+  choice(name: string): string;
+  flag(name: string): boolean;
+  /** The pneumatic node a port belongs to (ports joined by tubes share one). */
+  port(id: string): NodeRef;
+  /** True when a tube is attached to the port. */
+  connected(id: string): boolean;
+  internalNode(name: string, volumeM3: number): NodeRef;
+  atmosphere(): NodeRef;
+  fixedPressure(name: string, pressurePa: number): NodeRef;
+  /** Holds a port's node at a pressure (an ideal source): the node becomes a boundary. */
+  holdPort(id: string, pressurePa: number): NodeRef;
+  addVolume(node: NodeRef, volumeM3: number): void;
+  restriction(spec: RestrictionSpec): RestrictionRef;
+  piston(spec: PistonSpec): PistonRef;
+  /** Position links that actuate this component (roller valves, sensors). */
+  actuationLinks(): ActuationLink[];
+  ambientPa(): number;
+}
+
+export interface ComponentType {
+  /** Stable id stored in documents. Never rename. */
+  readonly id: string;
+  readonly version: number;
+  readonly label: string;
+  readonly category: Category;
+  readonly description: string;
+  readonly ports: readonly PortSpec[];
+  readonly parameters: Readonly<Record<string, ParameterSpec>>;
+  /** Discrete states the type can be in (valve positions, logic states), for symbols and the trace. */
+  readonly states: readonly string[];
+  /** Manual inputs a user can give on the drawing. */
+  readonly inputs?: readonly InputAction[];
+  build(ctx: BuildContext): Behaviour;
+}
+
+/** Reads a parameter with the type's default. */
+export function parameterDefaults(type: ComponentType): Record<string, number | string | boolean> {
+  return Object.fromEntries(Object.entries(type.parameters).map(([k, spec]) => [k, spec.default]));
+}

@@ -1,0 +1,56 @@
+import type { Behaviour, PistonSpec, RestrictionSpec } from '../components/types';
+
+/** A pneumatic node: ports joined by tubes, plus internal volumes and piston chambers. */
+export interface NodeModel {
+  name: string;
+  /** Fixed volume (ports, tubes, internal volumes), m³. */
+  volumeM3: number;
+  /** Boundary nodes hold their pressure (atmosphere, ideal supplies). */
+  fixed: boolean;
+  fixedPressurePa: number;
+  /** Chambers whose volume follows a piston: V += area·(x or stroke − x) + dead volume. */
+  chambers: Array<{ piston: number; side: 'cap' | 'rod' }>;
+}
+
+export interface RestrictionModel extends Omit<RestrictionSpec, 'from' | 'to' | 'modulator'> {
+  from: number;
+  to: number;
+  owner: string;
+  opening: number;
+  modulator?: { control: number; fn: (pressurePa: number) => { k: number; dk: number } };
+}
+
+export interface PistonModel extends Omit<PistonSpec, 'capNode' | 'rodNode'> {
+  owner: string;
+  capNode: number;
+  rodNode: number | null;
+}
+
+export interface BehaviourEntry {
+  componentId: string;
+  tag: string;
+  behaviour: Behaviour;
+}
+
+/** Severity and stable code of a problem found while compiling a document. */
+export interface Diagnostic {
+  code: string;
+  severity: 'error' | 'warning';
+  message: string;
+  componentId?: string;
+  tubeId?: string;
+}
+
+/** Everything the solver needs, built once from a document. */
+export interface SolverModel {
+  ambientPa: number;
+  temperatureK: number;
+  nodes: NodeModel[];
+  restrictions: RestrictionModel[];
+  pistons: PistonModel[];
+  behaviours: BehaviourEntry[];
+  /** Trace name → node index for every connected or internal port. */
+  portNodes: Array<{ signal: string; node: number }>;
+  /** Component id and tag lookup, for inputs given by either. */
+  componentIds: Map<string, number>;
+}

@@ -1,0 +1,74 @@
+import { R_AIR_J_PER_KG_K } from '../calc/constants';
+import { chokedGain } from '../calc/iso6358';
+import type { SolverModel } from './model';
+
+export type PistonMode = 'free' | 'stuck' | 'end-min' | 'end-max';
+
+/**
+ * Values every partition reads and writes, indexed by global node, restriction
+ * and piston. A partition only writes the entries of what it owns; fixed
+ * (boundary) pressures change only at synchronisation points.
+ */
+export class World {
+  readonly model: SolverModel;
+  /** R·T of the (isothermal) gas, J/kg. */
+  readonly rt: number;
+  readonly pressure: Float64Array;
+  readonly volume: Float64Array;
+  readonly fixedPressure: Float64Array;
+  readonly opening: Float64Array;
+  readonly gain: Float64Array;
+  readonly flow: Float64Array;
+  readonly dFlowA: Float64Array;
+  readonly dFlowB: Float64Array;
+  readonly dFlowC: Float64Array;
+  readonly position: Float64Array;
+  readonly velocity: Float64Array;
+  readonly mode: PistonMode[];
+  /** Sign of motion used for Coulomb friction while free. */
+  readonly direction: Float64Array;
+
+  constructor(model: SolverModel) {
+    this.model = model;
+    this.rt = R_AIR_J_PER_KG_K * model.temperatureK;
+    const nn = model.nodes.length;
+    const nr = model.restrictions.length;
+    const np = model.pistons.length;
+    this.pressure = Float64Array.from(model.nodes, (n) => (n.fixed ? n.fixedPressurePa : model.ambientPa));
+    this.volume = new Float64Array(nn);
+    this.fixedPressure = Float64Array.from(model.nodes, (n) => n.fixedPressurePa);
+    this.opening = Float64Array.from(model.restrictions, (r) => r.opening);
+    this.gain = Float64Array.from(model.restrictions, (r) => chokedGain(r.conductance, model.temperatureK));
+    this.flow = new Float64Array(nr);
+    this.dFlowA = new Float64Array(nr);
+    this.dFlowB = new Float64Array(nr);
+    this.dFlowC = new Float64Array(nr);
+    this.position = Float64Array.from(model.pistons, (p) => Math.min(Math.max(p.startPositionM, 0), p.strokeM));
+    this.velocity = new Float64Array(np);
+    this.mode = model.pistons.map((p, k) => (this.position[k]! <= 0 ? 'end-min' : this.position[k]! >= p.strokeM ? 'end-max' : 'stuck'));
+    this.direction = new Float64Array(np);
+    for (let i = 0; i < nn; i += 1) this.volume[i] = this.nodeVolume(i);
+  }
+
+  /** Volume of node i with its chambers at the current piston positions, m³. */
+  nodeVolume(i: number): number {
+    const node = this.model.nodes[i]!;
+    let v = node.volumeM3;
+    for (const c of node.chambers) {
+      const p = this.model.pistons[c.piston]!;
+      const x = Math.min(Math.max(this.position[c.piston]!, 0), p.strokeM);
+      v += c.side === 'cap' ? p.deadVolumeCapM3 + p.capArea * x : p.deadVolumeRodM3 + p.rodSideArea * (p.strokeM - x);
+    }
+    return v;
+  }
+
+  /** Net force on piston k towards extension, without friction, from the current pressures, N. */
+  driveForce(k: number): number {
+    const p = this.model.pistons[k]!;
+    const x = Math.min(Math.max(this.position[k]!, 0), p.strokeM);
+    const pCap = this.pressure[p.capNode]!;
+    const pRod = p.rodNode === null ? this.model.ambientPa : this.pressure[p.rodNode]!;
+    const spring = p.springPreloadN + p.springRateNPerM * x;
+    return pCap * p.capArea - pRod * p.rodSideArea - this.model.ambientPa * p.ambientArea - p.loadN - spring;
+  }
+}

@@ -1,0 +1,47 @@
+// `npm run bench:engine`: simulates generated circuits of about 10, 50 and 200
+// components for 10 s of machine time and prints wall time, real-time factor and
+// peak memory, then how cost grows with size. Figures, not pass/fail.
+import { compile } from '@/engine/solver/compile';
+import { simulate } from '@/engine/solver/simulate';
+import { MemoryTraceSink } from '@/engine/trace/trace';
+import { generatedCircuit } from './bench/generated-circuits';
+
+const MACHINE_SECONDS = 10;
+const SIZES = [10, 50, 200];
+
+class MeasuringSink extends MemoryTraceSink {
+  peakHeapBytes = 0;
+  override sample(t: number, values: Float64Array): void {
+    super.sample(t, values);
+    this.peakHeapBytes = Math.max(this.peakHeapBytes, process.memoryUsage().heapUsed);
+  }
+}
+
+function run(size: number): { components: number; wallS: number; steps: number; peakMiB: number; events: number } {
+  const { document, inputs } = generatedCircuit(size);
+  const { model, diagnostics } = compile(document);
+  if (!model) throw new Error(diagnostics.map((d) => d.message).join('\n'));
+  const sink = new MeasuringSink();
+  const started = performance.now();
+  simulate(model, inputs, { untilS: MACHINE_SECONDS, intervalS: 0.01 }, sink);
+  const wallS = (performance.now() - started) / 1000;
+  const trace = sink.toTrace(0.01, { steps: 0, rejectedSteps: 0, massBalanceErrorKg: 0 });
+  return { components: document.components.length, wallS, steps: trace.time.length, peakMiB: sink.peakHeapBytes / 2 ** 20, events: trace.events.length };
+}
+
+// Warm the JIT once so the first size is not charged for compilation.
+run(10);
+const rows = SIZES.map(run);
+console.log(`Engine benchmark: ${MACHINE_SECONDS} s of machine time, output every 10 ms, one core (Node ${process.version})`);
+console.log('components  wall (s)  real-time factor  peak heap (MiB)  events');
+for (const r of rows) {
+  console.log(
+    `${String(r.components).padStart(10)}  ${r.wallS.toFixed(3).padStart(8)}  ${(MACHINE_SECONDS / r.wallS).toFixed(1).padStart(16)}×  ${r.peakMiB.toFixed(1).padStart(15)}  ${String(r.events).padStart(6)}`,
+  );
+}
+for (let i = 1; i < rows.length; i += 1) {
+  const a = rows[i - 1]!;
+  const b = rows[i]!;
+  const exponent = Math.log(b.wallS / a.wallS) / Math.log(b.components / a.components);
+  console.log(`cost growth ${a.components} → ${b.components} components: wall time × ${(b.wallS / a.wallS).toFixed(2)} for size × ${(b.components / a.components).toFixed(2)} (exponent ${exponent.toFixed(2)}; 1 = linear)`);
+}

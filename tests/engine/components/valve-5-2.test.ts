@@ -1,0 +1,46 @@
+import { describe, it } from 'vitest';
+import { expectValveSteps, pushbutton, type ValveStep } from './harness';
+
+/** The valve piloted from two pushbutton 3/2 valves: `pa` on pilot 14 (side a), `pb` on pilot 12 (side b). */
+function expectPilotSteps(parameters: Record<string, string>, steps: ValveStep[]): void {
+  expectValveSteps('valve-5-2', parameters, ['2', '4'], steps, (c) => pushbutton(pushbutton(c, 'pa', 'sup:2'), 'pb', 'sup:2').tube('pa:2', 'v:14').tube('pb:2', 'v:12'));
+}
+
+describe('valve-5-2', () => {
+  it('feeds 2 at rest and 4 when pressed, the other line exhausted, and springs back', () => {
+    expectValveSteps('valve-5-2', {}, ['2', '4'], [
+      { actions: [], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ action: 'press' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ action: 'release' }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+    ]);
+  });
+
+  it('with pilot and spring return: follows pilot 14 and springs back when it is vented', () => {
+    // Pilot 14 fed from pushbutton valve `pa`.
+    expectPilotSteps({ actuation: 'pilot', returnBy: 'spring' }, [
+      { actions: [], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ component: 'pa', action: 'press' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ component: 'pa', action: 'release' }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+    ]);
+  });
+
+  it('with double pilots: keeps its last position when both pilots are vented (memory)', () => {
+    expectPilotSteps({ actuation: 'pilot', returnBy: 'pilot' }, [
+      { actions: [], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ component: 'pa', action: 'press' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ component: 'pa', action: 'release' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ component: 'pb', action: 'press' }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ component: 'pb', action: 'release' }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+    ]);
+  });
+
+  it('with double solenoids: keeps its last position when both coils are off (memory)', () => {
+    expectValveSteps('valve-5-2', { actuation: 'solenoid', returnBy: 'solenoid' }, ['2', '4'], [
+      { actions: [], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ action: 'set', value: 1 }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ action: 'set', value: 0 }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ action: 'set', parameter: 'b', value: 1 }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ action: 'set', parameter: 'b', value: 0 }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+    ]);
+  });
+});
