@@ -113,6 +113,7 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
   const switchTime = ctx.num('switchTime');
   const threshold = ctx.num('pilotThreshold');
   const hysteresis = ctx.num('pilotHysteresis');
+  const manualOverride = ctx.flag('manualOverride');
   const threePosition = def.positions.length === 3;
   // Side b is driven when the return is pilot or solenoid (double-acting valves), and always on 5/3.
   const sideBActuation: Actuation | null = threePosition ? actuation : returnBy === 'pilot' ? 'pilot' : returnBy === 'solenoid' ? 'solenoid' : null;
@@ -233,6 +234,11 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
       const s = command.parameter === 'b' ? 1 : 0;
       const side = sides[s]!;
       const kind = s === 0 ? actuation : sideBActuation;
+      // A solenoid is driven by its coil (`set`); pressing it by hand needs the manual override.
+      if (kind === 'solenoid' && command.action !== 'set' && !manualOverride) {
+        api.event('input-ignored', 'no manual override');
+        return;
+      }
       if (command.action === 'set') side.commanded = (command.value ?? 0) > 0;
       else if (command.action === 'toggle' || isLatching(kind)) {
         if (command.action !== 'release') side.commanded = !side.commanded;

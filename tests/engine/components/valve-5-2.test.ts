@@ -1,5 +1,7 @@
-import { describe, it } from 'vitest';
-import { expectValveSteps, pushbutton, type ValveStep } from './harness';
+import { describe, expect, it } from 'vitest';
+import { signal } from '@/engine/trace/trace';
+import { TestCircuit } from '../support/circuit';
+import { expectValveSteps, pushbutton, runCircuit, type ValveStep } from './harness';
 
 /** The valve piloted from two pushbutton 3/2 valves: `pa` on pilot 14 (side a), `pb` on pilot 12 (side b). */
 function expectPilotSteps(parameters: Record<string, string>, steps: ValveStep[]): void {
@@ -42,5 +44,21 @@ describe('valve-5-2', () => {
       { actions: [{ action: 'set', parameter: 'b', value: 1 }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
       { actions: [{ action: 'set', parameter: 'b', value: 0 }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
     ]);
+  });
+});
+
+describe('valve-5-2 solenoid manual override', () => {
+  it('moves on a press only when the manual override is fitted', () => {
+    const positionAfterPress = (manualOverride: boolean) => {
+      const doc = new TestCircuit()
+        .add('s', 'air-supply')
+        .add('v', 'valve-5-2', { actuation: 'solenoid', manualOverride })
+        .tube('s:2', 'v:1')
+        .build();
+      const trace = runCircuit(doc, [{ t: 0.1, component: 'v', action: 'press' }], 0.3);
+      return signal(trace, 'v:position')!.values.at(-1);
+    };
+    expect(positionAfterPress(true)).toBe(0);
+    expect(positionAfterPress(false)).toBe(1);
   });
 });
