@@ -138,6 +138,28 @@ export function isoMassFlowSmoothWithDerivatives(
  * solver's inner loop can call it millions of times without checks or garbage.
  */
 export function signedIsoFlowInto(out: SignedFlowWithDerivatives, gain: number, b: number, m: number, pa: number, pb: number, epsilon: number): void {
+  signedIsoFlowPreparedInto(out, gain, b, m, pa, pb, epsilon, isoLinearRegionPhi(b, m, epsilon));
+}
+
+/** φ(1 − ε) for critical ratio b and subsonic index m: fixes the slope of the linearised region (see {@link signedIsoFlowInto}). */
+export function isoLinearRegionPhi(b: number, m: number, epsilon: number): number {
+  return shape(1 - epsilon, b, m).phi;
+}
+
+/**
+ * {@link signedIsoFlowInto} with φ(1 − ε) worked out beforehand by {@link isoLinearRegionPhi}
+ * (it depends only on b, m and ε), for the solver's inner loop. Same results bit for bit.
+ */
+export function signedIsoFlowPreparedInto(
+  out: SignedFlowWithDerivatives,
+  gain: number,
+  b: number,
+  m: number,
+  pa: number,
+  pb: number,
+  epsilon: number,
+  linearPhi: number,
+): void {
   const forward = pa >= pb;
   const p1 = forward ? pa : pb;
   const p2 = forward ? pb : pa;
@@ -147,7 +169,7 @@ export function signedIsoFlowInto(out: SignedFlowWithDerivatives, gain: number, 
   if (p1 > 0 && gain > 0) {
     const r = p2 / p1;
     if (r > 1 - epsilon) {
-      const slope = (gain * shape(1 - epsilon, b, m).phi) / epsilon;
+      const slope = (gain * linearPhi) / epsilon;
       flow = slope * (p1 - p2);
       d1 = slope;
       d2 = -slope;

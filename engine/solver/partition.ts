@@ -1,15 +1,66 @@
-import { ISO_LINEAR_REGION_EPSILON, signedIsoFlowInto } from '../calc/iso6358';
+import { ISO_LINEAR_REGION_EPSILON, isoLinearRegionPhi, signedIsoFlowPreparedInto } from '../calc/iso6358';
 import { SparseLu } from './sparse-lu';
 import type { World } from './world';
 
 /** Events are located to within this time, s. */
 export const EVENT_TOLERANCE_S = 1e-6;
 
-// ROS2 (Verwer, Spee, Blom & Hundsdorfer 1999): second order, L-stable, and order 2
-// with any approximation of the Jacobian (a W-method), which lets us leave out the
-// derivatives of switching and of regulator openings with respect to position.
-const GAMMA = 1 + 1 / Math.SQRT2;
+// ROS34PW2 (J. Rang & L. Angermann, "New Rosenbrock W-methods of order 3 for partial
+// differential algebraic equations of index 1", BIT Numer. Math. 45 (2005) 761–787):
+// four stages, order 3 with an embedded order-2 solution, L-stable and stiffly accurate,
+// and a W-method — its orders hold with any approximation of the Jacobian, which lets us
+// leave out the derivatives of switching and of regulator openings with respect to position.
+// Coefficients in the form (I − γhJ)k_i = h·f(y + Σ α_ij k_j) + hJ·Σ γ_ij k_j. The embedded
+// weights satisfy Σ b̂ = 1, Σ b̂_i α_i = 1/2 and Σ b̂_i γ'_i = −γ to round-off, and the orders
+// (3, embedded 2, with exact, zero and wrong Jacobians) are measured in
+// tests/engine/solver/rosenbrock-order.test.ts.
+const GAMMA = 0.435866521508459;
+const ALPHA: readonly (readonly number[])[] = [[], [0.871733043016918], [0.84457060015369423, -0.11299064236484185], [0, 0, 1]];
+const GAMMA_IJ: readonly (readonly number[])[] = [[], [-0.871733043016918], [-0.90338057013044082, 0.054180672388095326], [0.24212380706095346, -1.2232505839045147, 0.54526025533510214]];
+const B = [0.24212380706095346, -1.2232505839045147, 1.545260255335102, 0.435866521508459];
+const B_EMBEDDED = [0.37810903145819369, -0.096042292212423178, 0.5, 0.2179332607542295];
+
+/**
+ * The tableau in the variables u_i = Σ_{j≤i} γ_ij k_j (Hairer & Wanner, Solving ODEs II, §IV.7),
+ * which need no Jacobian–vector products: (I − γhJ)u_i = γh·f(y + Σ a_ij u_j) + Σ c_ij u_j,
+ * y_new = y + Σ m_j u_j, error estimate Σ e_j u_j. Worked out once from the published table.
+ */
+export const ROS34PW2 = (() => {
+  const s = 4;
+  const g = Array.from({ length: s }, (_, i) => Array.from({ length: s }, (_, j) => (i === j ? GAMMA : j < i ? GAMMA_IJ[i]![j]! : 0)));
+  // Inverse of the lower-triangular Γ by forward substitution.
+  const inv = Array.from({ length: s }, () => new Array<number>(s).fill(0));
+  for (let i = 0; i < s; i += 1) {
+    inv[i]![i] = 1 / GAMMA;
+    for (let j = 0; j < i; j += 1) {
+      let sum = 0;
+      for (let k = j; k < i; k += 1) sum += g[i]![k]! * inv[k]![j]!;
+      inv[i]![j] = -sum / GAMMA;
+    }
+  }
+  const a = Array.from({ length: s }, (_, i) => Array.from({ length: i }, (_, j) => {
+    let sum = 0;
+    for (let k = j; k < i; k += 1) sum += ALPHA[i]![k]! * inv[k]![j]!;
+    return sum;
+  }));
+  const c = Array.from({ length: s }, (_, i) => Array.from({ length: i }, (_, j) => -GAMMA * inv[i]![j]!));
+  const m = Array.from({ length: s }, (_, j) => B.reduce((sum, b, i) => sum + b * inv[i]![j]!, 0));
+  const mHat = Array.from({ length: s }, (_, j) => B_EMBEDDED.reduce((sum, b, i) => sum + b * inv[i]![j]!, 0));
+  return { stages: s, gamma: GAMMA, a, c, m, e: m.map((x, j) => x - mHat[j]!), order: 3 };
+})();
+
+// The transformed coefficients as plain constants for the inner loop.
+const [, [A21], [A31, A32], [A41, A42, A43]] = ROS34PW2.a as [number[], [number], [number, number], [number, number, number]];
+const [, [C21], [C31, C32], [C41, C42, C43]] = ROS34PW2.c as [number[], [number], [number, number], [number, number, number]];
+const [M1, M2, M3, M4] = ROS34PW2.m as [number, number, number, number];
+const [E1, E2, E3, E4] = ROS34PW2.e as [number, number, number, number];
+
 const LINEAR_EPSILON = ISO_LINEAR_REGION_EPSILON;
+// Bound once: module bindings of imports can cost a property read per call in some loaders.
+const flowInto = signedIsoFlowPreparedInto;
+
+/** Filter the error estimate through W⁻¹ (Shampine's device) so that stiff, well-damped nodes do not dictate the step. */
+const FILTER_ERROR = true;
 
 /** Absolute tolerances of piston states: 0.01 mm and 1 mm/s. */
 const POSITION_TOLERANCE_M = 1e-5;
@@ -47,6 +98,18 @@ export interface Tolerances {
   maxStepS: number;
 }
 
+/** Where a partition writes its trace values at the output times that fall inside its steps. */
+export interface OutputRows {
+  /** Output interval, s: output k is at k·intervalS. */
+  readonly intervalS: number;
+  /** The row of output k, or null when it is not pending. */
+  row(k: number): Float64Array | null;
+}
+
+/** What a trace column of a partition reads from the world. */
+export const OutputKind = { Pressure: 0, Position: 1, Velocity: 2, Flow: 3 } as const;
+export type OutputKind = (typeof OutputKind)[keyof typeof OutputKind];
+
 /** The guards of one partition: piston end stops, stiction, and its behaviours' conditions. */
 export interface GuardSource {
   /** Appends the partition's behaviour guard values, with their owners. */
@@ -77,14 +140,26 @@ export class Partition {
   private readonly rFromFree: Uint8Array;
   private readonly rToFree: Uint8Array;
   private readonly pIndex: Int32Array;
+  private readonly rLinearPhi: Float64Array;
+  // Volume of each free node: fixed part plus chamber terms (piston, area coefficient, offset) in CSR form.
+  private readonly nodeBaseVolume: Float64Array;
+  private readonly chamberStart: Int32Array;
+  private readonly chamberPiston: Int32Array;
+  private readonly chamberArea: Float64Array;
+  private readonly chamberOffset: Float64Array;
+  private readonly chamberStroke: Float64Array;
 
   private y: Float64Array;
   private f: Float64Array;
   private candidate: Float64Array;
   private fCandidate: Float64Array;
   private readonly stage: Float64Array;
-  private readonly k1: Float64Array;
-  private readonly k2: Float64Array;
+  private readonly fStage: Float64Array;
+  private readonly errVec: Float64Array;
+  /** Stage vectors of the transformed method. */
+  private readonly u: Float64Array[];
+  /** Absolute mass tolerance of each free node at the start of the step, kg. */
+  private readonly massScaleOf: Float64Array;
   private fValid = false;
   private readonly scratch = { flow: 0, dFlowdPa: 0, dFlowdPb: 0 };
   private readonly lu: SparseLu;
@@ -92,6 +167,8 @@ export class Partition {
 
   time = 0;
   private h = 1e-5;
+  /** The next step follows a discrete change: its size is estimated afresh. */
+  private restart = true;
   quiescent = false;
   steps = 0;
   rejected = 0;
@@ -107,6 +184,14 @@ export class Partition {
   private snapQuiescent = false;
   private snapGuards: number[] = [];
   private snapOwners: number[] = [];
+  // Trace columns this partition fills between meeting points, and their values at the committed state.
+  private outCols = new Int32Array(0);
+  private outKind = new Uint8Array(0);
+  private outSource = new Int32Array(0);
+  private outPrev = new Float64Array(0);
+  private outNew = new Float64Array(0);
+  private rows: OutputRows | null = null;
+
   /** Guards must be recomputed before the next advance (something discrete changed). */
   dirty = true;
   /** A boundary pressure that its guards read has just changed. */
@@ -142,13 +227,42 @@ export class Partition {
     this.rFromFree = Uint8Array.from(spec.restrictions, (r) => (nodes[restrictions[r]!.from]!.fixed ? 0 : 1));
     this.rToFree = Uint8Array.from(spec.restrictions, (r) => (nodes[restrictions[r]!.to]!.fixed ? 0 : 1));
     this.pIndex = Int32Array.from(spec.pistons);
+    this.rLinearPhi = Float64Array.from(spec.restrictions, (r) => isoLinearRegionPhi(restrictions[r]!.criticalRatio, 0.5, LINEAR_EPSILON));
+    this.nodeBaseVolume = Float64Array.from(spec.freeNodes, (node) => nodes[node]!.volumeM3);
+    this.chamberStart = new Int32Array(spec.freeNodes.length + 1);
+    const cPiston: number[] = [];
+    const cArea: number[] = [];
+    const cOffset: number[] = [];
+    const cStroke: number[] = [];
+    spec.freeNodes.forEach((node, i) => {
+      for (const c of nodes[node]!.chambers) {
+        const p = world.model.pistons[c.piston]!;
+        // cap: dead + A·x; rod: dead + a·(stroke − x) = (dead + a·stroke) − a·x.
+        cPiston.push(c.piston);
+        cStroke.push(p.strokeM);
+        if (c.side === 'cap') {
+          cArea.push(p.capArea);
+          cOffset.push(p.deadVolumeCapM3);
+        } else {
+          cArea.push(-p.rodSideArea);
+          cOffset.push(p.deadVolumeRodM3 + p.rodSideArea * p.strokeM);
+        }
+      }
+      this.chamberStart[i + 1] = cPiston.length;
+    });
+    this.chamberPiston = Int32Array.from(cPiston);
+    this.chamberArea = Float64Array.from(cArea);
+    this.chamberOffset = Float64Array.from(cOffset);
+    this.chamberStroke = Float64Array.from(cStroke);
     this.y = new Float64Array(n);
     this.f = new Float64Array(n);
     this.candidate = new Float64Array(n);
     this.fCandidate = new Float64Array(n);
     this.stage = new Float64Array(n);
-    this.k1 = new Float64Array(n);
-    this.k2 = new Float64Array(n);
+    this.fStage = new Float64Array(n);
+    this.errVec = new Float64Array(n);
+    this.u = Array.from({ length: ROS34PW2.stages }, () => new Float64Array(n));
+    this.massScaleOf = new Float64Array(this.nMass);
     this.snapY = new Float64Array(n);
     spec.freeNodes.forEach((node, i) => (this.y[i] = (world.pressure[node]! * world.volume[node]!) / world.rt));
     spec.pistons.forEach((k, j) => (this.y[this.xIndex[j]!] = world.position[k]!));
@@ -171,14 +285,76 @@ export class Partition {
     this.fValid = false;
     this.dirty = true;
     // A discontinuity: restart with a small step and let the controller grow it again.
-    this.h = Math.min(this.h, RESTART_STEP_S);
+    this.restart = true;
   }
 
   refresh(): void {
     this.writePositions(this.y);
     this.evaluate(this.y, this.f);
     this.fValid = true;
+    this.readOutputs(this.outPrev);
   }
+
+  /**
+   * The trace columns this partition owns (port pressures of its free nodes, its pistons,
+   * its passages' flows): between meeting points it writes them into the pending rows,
+   * interpolated linearly between the accepted steps around each output time.
+   */
+  setOutputs(columns: readonly number[], kinds: readonly OutputKind[], sources: readonly number[], rows: OutputRows): void {
+    this.outCols = Int32Array.from(columns);
+    this.outKind = Uint8Array.from(kinds);
+    this.outSource = Int32Array.from(sources);
+    this.outPrev = new Float64Array(columns.length);
+    this.outNew = new Float64Array(columns.length);
+    this.rows = rows;
+    this.readOutputs(this.outPrev);
+  }
+
+  private readOutputs(into: Float64Array): void {
+    const w = this.w;
+    const kind = this.outKind;
+    const source = this.outSource;
+    for (let i = 0; i < into.length; i += 1) {
+      const s = source[i]!;
+      switch (kind[i]) {
+        case OutputKind.Pressure:
+          into[i] = w.pressure[s]!;
+          break;
+        case OutputKind.Position:
+          into[i] = w.position[s]!;
+          break;
+        case OutputKind.Velocity:
+          into[i] = w.velocity[s]!;
+          break;
+        default:
+          into[i] = w.flow[s]!;
+      }
+    }
+  }
+
+  /** Writes the outputs at the output times in (t0, t1]: between outPrev at t0 and outNew at t1 (or outPrev throughout). */
+  private writeRows(t0: number, t1: number, interpolate: boolean): void {
+    const rows = this.rows;
+    if (!rows || this.outCols.length === 0 || !(t1 > t0)) return;
+    const dt = rows.intervalS;
+    let k = Math.floor(t0 / dt);
+    while (k * dt <= t0 + 1e-12) k += 1;
+    const cols = this.outCols;
+    const prev = this.outPrev;
+    const next = this.outNew;
+    for (; k * dt <= t1 + 1e-12; k += 1) {
+      const row = rows.row(k);
+      if (!row) continue;
+      if (!interpolate) {
+        for (let i = 0; i < cols.length; i += 1) row[cols[i]!] = prev[i]!;
+        continue;
+      }
+      const theta = Math.min(1, Math.max(0, (k * dt - t0) / (t1 - t0)));
+      for (let i = 0; i < cols.length; i += 1) row[cols[i]!] = prev[i]! + theta * (next[i]! - prev[i]!);
+    }
+  }
+
+  /** Guards must be recomputed before the next advance
 
   /** Makes the world's arrays describe this partition's committed state. */
   ensureFresh(): void {
@@ -194,6 +370,7 @@ export class Partition {
     this.wake();
   }
 
+  /** Remembers the committed state, to undo the next step. */
   snapshot(): void {
     this.snapTime = this.time;
     this.snapQuiescent = this.quiescent;
@@ -226,31 +403,37 @@ export class Partition {
   }
 
   /**
-   * Integrates from `time` to `until`, stopping early at the first guard
-   * crossing (then `crossed` lists the guards). A quiescent partition only moves its clock.
+   * Takes one accepted step towards `until` (a quiescent partition jumps there); it may stop
+   * short at a guard crossing, then `crossed` lists the guards. `snapshot()` before it and
+   * `restore()` after it undo the step.
    */
-  advanceTo(until: number): void {
+  advanceStep(until: number): void {
     this.crossed = [];
     if (this.quiescent) {
+      this.writeRows(this.time, until, false);
       this.time = until;
       return;
     }
-    while (this.time < until - 1e-12) {
-      if (this.step(until) !== 'continue') return;
-    }
-    this.time = until;
+    if (this.step(until) === 'continue' && this.time >= until - 1e-12) this.time = until;
   }
 
   /** One accepted step: it may end on a guard crossing, or find the partition at rest (then it jumps to `stop`). */
   private step(stop: number): 'continue' | 'crossed' | 'quiescent' {
-    let h = Math.min(this.h, this.tol.maxStepS, stop - this.time);
+    if (this.restart) {
+      this.h = Math.min(this.h, this.restartStep());
+      this.restart = false;
+    }
+    const wanted = Math.min(this.h, this.tol.maxStepS);
+    let h = Math.min(wanted, stop - this.time);
+    let shortened = false;
     for (;;) {
       const landsOnStop = h >= stop - this.time - 1e-15;
-      const trial = this.rosenbrock(h);
-      if (!trial.ok || trial.err > 1) {
+      const err = this.rosenbrock(h);
+      if (err < 0 || err > 1) {
         this.rejected += 1;
         this.fValid = false;
-        h *= trial.ok ? Math.max(0.2, 0.9 / Math.sqrt(trial.err)) : 0.25;
+        h *= err >= 0 ? Math.max(0.2, 0.9 * Math.pow(err, -1 / 3)) : 0.25;
+        shortened = true;
         if (h < 1e-12) throw new Error('step size underflow: the circuit could not be integrated');
         continue;
       }
@@ -272,10 +455,19 @@ export class Partition {
         this.fValid = false;
         this.writePositions(this.y);
         h = Math.max(theta * h + EVENT_TOLERANCE_S / 2, EVENT_TOLERANCE_S / 2);
+        shortened = true;
         continue;
       }
       this.steps += 1;
+      const t0 = this.time;
       this.time = landsOnStop ? stop : this.time + h;
+      if (this.outCols.length) {
+        this.readOutputs(this.outNew);
+        this.writeRows(t0, this.time, true);
+        const prev = this.outPrev;
+        this.outPrev = this.outNew;
+        this.outNew = prev;
+      }
       const y = this.y;
       this.y = this.candidate;
       this.candidate = y;
@@ -285,8 +477,10 @@ export class Partition {
       this.fValid = true;
       this.guardValues = after;
       this.guardOwners = owners;
-      const grow = trial.err > 0 ? Math.min(4, Math.max(0.2, 0.9 / Math.sqrt(trial.err))) : 4;
-      this.h = Math.max(h * grow, 1e-9);
+      const grow = err > 0 ? Math.min(4, Math.max(0.2, 0.9 * Math.pow(err, -1 / 3))) : 4;
+      // A step cut short only to land on a meeting point says nothing against the step size
+      // the controller wanted: keep that for the next step.
+      this.h = Math.max(landsOnStop && !shortened && grow >= 1 ? Math.max(h * grow, wanted) : h * grow, 1e-9);
       if (crossed.length) {
         this.crossed = crossed;
         return 'crossed';
@@ -295,9 +489,36 @@ export class Partition {
       if (!this.quiescent) return 'continue';
       // Frozen from here on: the little flow left moves no air in the model, so none is reported.
       for (let j = 0; j < this.rIndex.length; j += 1) this.w.flow[this.rIndex[j]!] = 0;
+      this.readOutputs(this.outPrev);
+      this.writeRows(this.time, stop, false);
       this.time = stop;
       return 'quiescent';
     }
+  }
+
+  /**
+   * First step after a discrete change: a hundredth of the time in which the state would
+   * change by its own size at the present rates (both in tolerance units), the usual
+   * starting-step heuristic (Hairer, Nørsett & Wanner, Solving ODEs I, §II.4), never below
+   * RESTART_STEP_S; the error control takes it from there.
+   */
+  private restartStep(): number {
+    if (!this.fValid) this.refresh();
+    const firstPiston = this.nMass + this.spec.fixedNodes.length;
+    let d0 = 0;
+    let d1 = 0;
+    for (let i = 0; i < this.nState; i += 1) {
+      if (i >= this.nMass && i < firstPiston) continue;
+      const magnitude = Math.abs(this.y[i]!);
+      const scale =
+        i < this.nMass
+          ? this.massScale(i, magnitude)
+          : ((i - firstPiston) % 2 === 0 ? POSITION_TOLERANCE_M : VELOCITY_TOLERANCE_M_PER_S) + this.tol.relTol * magnitude;
+      d0 = Math.max(d0, magnitude / scale);
+      d1 = Math.max(d1, Math.abs(this.f[i]!) / scale);
+    }
+    const h0 = d1 > 0 ? (0.01 * Math.max(d0, 1)) / d1 : this.tol.maxStepS;
+    return Math.max(RESTART_STEP_S, h0);
   }
 
   /** Nothing moves and no mass drifts noticeably: the state can stand still until something wakes it. */
@@ -314,47 +535,63 @@ export class Partition {
     return (this.tol.absTolPa * this.w.volume[node]!) / this.w.rt + this.tol.relTol * magnitude;
   }
 
-  private rosenbrock(h: number): { ok: boolean; err: number } {
+  /**
+   * One ROS34PW2 step of size h from the committed state into `candidate` (and the world's
+   * arrays); returns the weighted RMS error estimate, or -1 when a stage left the physical range.
+   */
+  private rosenbrock(h: number): number {
     const n = this.nState;
     const y0 = this.y;
     if (!this.fValid) this.refresh();
     this.assembleW(h);
     this.lu.factor();
-    const k1 = this.k1;
-    k1.set(this.f);
-    this.lu.solve(k1);
-    const y1 = this.stage;
-    for (let i = 0; i < n; i += 1) y1[i] = y0[i]! + h * k1[i]!;
-    const k2 = this.k2;
-    this.writePositions(y1);
-    if (!this.evaluate(y1, k2)) return { ok: false, err: Infinity };
-    for (let i = 0; i < n; i += 1) k2[i] = k2[i]! - 2 * k1[i]!;
-    this.lu.solve(k2);
+    const gh = GAMMA * h;
+    const massScaleOf = this.massScaleOf;
+    for (let i = 0; i < this.nMass; i += 1) massScaleOf[i] = this.massScale(i, 0);
+    const [u1, u2, u3, u4] = this.u as [Float64Array, Float64Array, Float64Array, Float64Array];
+    const yStage = this.stage;
+    const fStage = this.fStage;
+    const f0 = this.f;
+    for (let i = 0; i < n; i += 1) u1[i] = gh * f0[i]!;
+    this.lu.solve(u1);
+    for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A21 * u1[i]!;
+    this.writePositions(yStage);
+    if (!this.evaluate(yStage, fStage)) return -1;
+    for (let i = 0; i < n; i += 1) u2[i] = gh * fStage[i]! + C21 * u1[i]!;
+    this.lu.solve(u2);
+    for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A31 * u1[i]! + A32 * u2[i]!;
+    this.writePositions(yStage);
+    if (!this.evaluate(yStage, fStage)) return -1;
+    for (let i = 0; i < n; i += 1) u3[i] = gh * fStage[i]! + C31 * u1[i]! + C32 * u2[i]!;
+    this.lu.solve(u3);
+    for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A41 * u1[i]! + A42 * u2[i]! + A43 * u3[i]!;
+    this.writePositions(yStage);
+    if (!this.evaluate(yStage, fStage)) return -1;
+    for (let i = 0; i < n; i += 1) u4[i] = gh * fStage[i]! + C41 * u1[i]! + C42 * u2[i]! + C43 * u3[i]!;
+    this.lu.solve(u4);
     const yNew = this.candidate;
-    // Error of the embedded first-order solution, filtered through W⁻¹ (Shampine's device) so
-    // that stiff, well-damped components (tiny tube volumes) do not dictate the step size.
-    const err = this.stage;
+    const err = this.errVec;
     for (let i = 0; i < n; i += 1) {
-      yNew[i] = y0[i]! + 1.5 * h * k1[i]! + 0.5 * h * k2[i]!;
-      err[i] = 0.5 * h * (k1[i]! + k2[i]!);
+      yNew[i] = y0[i]! + M1 * u1[i]! + M2 * u2[i]! + M3 * u3[i]! + M4 * u4[i]!;
+      err[i] = E1 * u1[i]! + E2 * u2[i]! + E3 * u3[i]! + E4 * u4[i]!;
     }
-    this.lu.solve(err);
+    if (FILTER_ERROR) this.lu.solve(err);
     let errSq = 0;
     let counted = 0;
     const firstPiston = this.nMass + this.spec.fixedNodes.length;
     for (let i = 0; i < n; i += 1) {
       const magnitude = Math.max(Math.abs(y0[i]!), Math.abs(yNew[i]!));
       let scale: number;
-      if (i < this.nMass) scale = this.massScale(i, magnitude);
+      if (i < this.nMass) scale = this.massScaleOf[i]! + this.tol.relTol * magnitude;
       else if (i < firstPiston) continue;
       else scale = ((i - firstPiston) % 2 === 0 ? POSITION_TOLERANCE_M : VELOCITY_TOLERANCE_M_PER_S) + this.tol.relTol * magnitude;
-      const e = err[i]! / scale;
-      errSq += e * e;
+      const ei = err[i]! / scale;
+      errSq += ei * ei;
       counted += 1;
     }
     this.writePositions(yNew);
-    const ok = this.evaluate(yNew, this.fCandidate);
-    return { ok, err: counted ? Math.sqrt(errSq / counted) : 0 };
+    if (!this.evaluate(yNew, this.fCandidate)) return -1;
+    return counted ? Math.sqrt(errSq / counted) : 0;
   }
 
   private writePositions(y: Float64Array): void {
@@ -372,13 +609,22 @@ export class Partition {
     const pressure = w.pressure;
     let physical = true;
     const free = this.spec.freeNodes;
+    const volume = w.volume;
+    const position = w.position;
+    const rt = w.rt;
+    const start = this.chamberStart;
     for (let i = 0; i < free.length; i += 1) {
       const node = free[i]!;
-      const v = w.nodeVolume(node);
-      w.volume[node] = v;
+      let v = this.nodeBaseVolume[i]!;
+      for (let c = start[i]!; c < start[i + 1]!; c += 1) {
+        const x = position[this.chamberPiston[c]!]!;
+        const stroke = this.chamberStroke[c]!;
+        v += this.chamberOffset[c]! + this.chamberArea[c]! * (x < 0 ? 0 : x > stroke ? stroke : x);
+      }
+      volume[node] = v;
       const m = y[i]!;
       if (m <= 0) physical = false;
-      pressure[node] = ((m > 1e-15 ? m : 1e-15) * w.rt) / v;
+      pressure[node] = ((m > 1e-15 ? m : 1e-15) * rt) / v;
     }
     f.fill(0);
     const scratch = this.scratch;
@@ -401,7 +647,7 @@ export class Partition {
       let db = 0;
       let dc = 0;
       if ((k > 0 || dk !== 0) && !(this.rOneWay[j] && pa <= pb)) {
-        signedIsoFlowInto(scratch, w.gain[r]!, this.rCritical[j]!, 0.5, pa, pb, LINEAR_EPSILON);
+        flowInto(scratch, w.gain[r]!, this.rCritical[j]!, 0.5, pa, pb, LINEAR_EPSILON, this.rLinearPhi[j]!);
         q = k * scratch.flow;
         da = k * scratch.dFlowdPa;
         db = k * scratch.dFlowdPb;

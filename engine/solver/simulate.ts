@@ -3,7 +3,7 @@ import type { InputCommand, NodeRef, PistonRef, RestrictionRef, RuntimeApi } fro
 import { MemoryTraceSink, type SignalUnit, type Trace, type TraceSink } from '../trace/trace';
 import type { SolverModel } from './model';
 import { buildPartitions } from './partitioning';
-import { Partition, type GuardSource } from './partition';
+import { OutputKind, Partition, type GuardSource, type OutputRows } from './partition';
 import { World } from './world';
 
 export { EVENT_TOLERANCE_S } from './partition';
@@ -25,11 +25,18 @@ export interface SimulationOptions {
   relTol?: number;
   /** Absolute pressure tolerance, Pa (default 200, i.e. 0.002 bar). */
   absTolPa?: number;
-  /** Longest step, s (default 0.02, never above the output interval). */
+  /** Longest step, s (default 0.02; outputs between steps are interpolated, so it need not follow the output interval). */
   maxStepS?: number;
   /** Record the mass flow through every passage (default true). */
   recordFlows?: boolean;
 }
+
+/**
+ * Output rows kept pending between meeting points. Partitions step past output times
+ * and fill their columns by interpolation; the rows go to the sink once every partition
+ * has passed them. Meeting points are at least this often, which bounds the buffer.
+ */
+const PENDING_ROWS = 64;
 
 interface Timer {
   t: number;
@@ -48,7 +55,7 @@ export function simulate(model: SolverModel, inputs: readonly InputEvent[], opti
   return new Run(model, options, sink).execute([...inputs].sort((a, b) => a.t - b.t));
 }
 
-class Run implements GuardSource {
+class Run implements GuardSource, OutputRows {
   private readonly m: SolverModel;
   private readonly w: World;
   private readonly partitions: Partition[];
@@ -59,7 +66,6 @@ class Run implements GuardSource {
   private readonly partitionOfBehaviour: Int32Array;
   /** Partitions holding each behaviour's passages and pistons: woken whenever the behaviour acts. */
   private readonly partitionsOwnedBy: number[][];
-  private readonly intervalS: number;
   private readonly untilS: number;
   private readonly sink: TraceSink;
   private readonly memory: MemoryTraceSink | null;
@@ -70,6 +76,13 @@ class Run implements GuardSource {
   private time = 0;
   private currentBehaviour = -1;
   private readonly initialBudget: number;
+  private readonly behind: number[] = [];
+  readonly intervalS: number;
+  /** Ring of pending output rows; row k lives at k mod PENDING_ROWS while firstPending ≤ k < firstPending + PENDING_ROWS. */
+  private readonly pending: Float64Array[] = [];
+  private firstPending = 1;
+  /** Columns that no partition fills: boundary pressures, passages between boundaries, behaviour signals. */
+  private constantColumns = new Int32Array(0);
 
   constructor(model: SolverModel, options: SimulationOptions, sink?: TraceSink) {
     this.m = model;
@@ -80,7 +93,7 @@ class Run implements GuardSource {
     this.memory = sink ? null : new MemoryTraceSink();
     this.sink = sink ?? this.memory!;
     this.api = this.makeApi();
-    const tol = { relTol: options.relTol ?? 1e-3, absTolPa: options.absTolPa ?? 200, maxStepS: Math.min(options.maxStepS ?? 0.02, this.intervalS) };
+    const tol = { relTol: options.relTol ?? 1e-3, absTolPa: options.absTolPa ?? 200, maxStepS: options.maxStepS ?? 0.02 };
     const specs = buildPartitions(model, this.api);
     this.partitions = specs.map((spec) => new Partition(this.w, spec, tol, this));
     this.partitionOfRestriction = new Int32Array(model.restrictions.length).fill(-1);
@@ -107,10 +120,61 @@ class Run implements GuardSource {
     this.initialBudget = this.airBudget();
   }
 
+  row(k: number): Float64Array | null {
+    return k >= this.firstPending && k < this.firstPending + PENDING_ROWS ? this.pending[k % PENDING_ROWS]! : null;
+  }
+
+  /** Tells each partition which trace columns it fills between meeting points. */
+  private assignColumns(width: number): void {
+    const columns = this.partitions.map(() => ({ cols: [] as number[], kinds: [] as OutputKind[], sources: [] as number[] }));
+    const owned = new Uint8Array(width);
+    const partitionOfNode = new Int32Array(this.m.nodes.length).fill(-1);
+    this.partitions.forEach((p, i) => {
+      for (const node of p.spec.freeNodes) partitionOfNode[node] = i;
+    });
+    const claim = (partition: number, col: number, kind: OutputKind, source: number) => {
+      if (partition < 0) return;
+      columns[partition]!.cols.push(col);
+      columns[partition]!.kinds.push(kind);
+      columns[partition]!.sources.push(source);
+      owned[col] = 1;
+    };
+    let col = 0;
+    for (const p of this.m.portNodes) claim(partitionOfNode[p.node]!, col++, OutputKind.Pressure, p.node);
+    this.m.pistons.forEach((_, k) => {
+      claim(this.partitionOfPiston[k]!, col++, OutputKind.Position, k);
+      claim(this.partitionOfPiston[k]!, col++, OutputKind.Velocity, k);
+    });
+    if (this.recordFlows) for (let r = 0; r < this.m.restrictions.length; r += 1) claim(this.partitionOfRestriction[r]!, col++, OutputKind.Flow, r);
+    this.partitions.forEach((p, i) => p.setOutputs(columns[i]!.cols, columns[i]!.kinds, columns[i]!.sources, this));
+    const constant: number[] = [];
+    for (let c = 0; c < width; c += 1) if (!owned[c]) constant.push(c);
+    this.constantColumns = Int32Array.from(constant);
+    for (let i = 0; i < PENDING_ROWS; i += 1) this.pending.push(new Float64Array(width));
+  }
+
+  /**
+   * Sends the pending rows before `reached` to the sink. The columns no partition fills
+   * hold still between meeting points: they are taken from the world as it is now.
+   */
+  private flushRows(reached: number, sample: Float64Array): void {
+    if (this.firstPending * this.intervalS >= reached - 1e-12) return;
+    this.sampleInto(sample);
+    const constant = this.constantColumns;
+    while (this.firstPending * this.intervalS < reached - 1e-12 && this.firstPending * this.intervalS < this.untilS - 1e-12) {
+      const k = this.firstPending;
+      const row = this.pending[k % PENDING_ROWS]!;
+      for (let i = 0; i < constant.length; i += 1) row[constant[i]!] = sample[constant[i]!]!;
+      this.sink.sample(k * this.intervalS, row);
+      this.firstPending += 1;
+    }
+  }
+
   execute(inputs: InputEvent[]): Trace {
     const names = this.signalNames();
     this.sink.begin(names);
     const sample = new Float64Array(names.length);
+    this.assignColumns(names.length);
     for (const p of this.partitions) p.refresh();
     this.m.behaviours.forEach((_, i) => this.withBehaviour(i, (b) => b.start?.(this.api)));
     this.settle();
@@ -121,14 +185,16 @@ class Run implements GuardSource {
     this.record(sample);
 
     let inputCursor = 0;
-    let outputIndex = 1;
     while (this.time < this.untilS - 1e-12) {
-      const nextOutput = Math.min(outputIndex * this.intervalS, this.untilS);
+      // Partitions meet at inputs, timers and events (and often enough to bound the pending rows),
+      // not at every output time.
+      const lastPending = Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS);
       const nextInput = inputs[inputCursor]?.t ?? Infinity;
       const nextTimer = this.timers[0]?.t ?? Infinity;
-      const target = Math.max(Math.min(nextOutput, nextInput, nextTimer), this.time);
+      const target = Math.max(Math.min(lastPending, nextInput, nextTimer), this.time);
       const reached = this.advanceAll(target);
       this.time = reached;
+      this.flushRows(reached, sample);
       this.fireCrossings();
       if (reached >= target - 1e-12) {
         while (inputCursor < inputs.length && inputs[inputCursor]!.t <= this.time + 1e-12) this.applyInput(inputs[inputCursor++]!);
@@ -138,9 +204,10 @@ class Run implements GuardSource {
         }
       }
       this.settle();
+      const nextOutput = Math.min(this.firstPending * this.intervalS, this.untilS);
       if (this.time >= nextOutput - 1e-12) {
         this.record(sample);
-        outputIndex += 1;
+        this.firstPending += 1;
       }
     }
     const steps = this.partitions.reduce((s, p) => s + p.steps, 0);
@@ -151,21 +218,68 @@ class Run implements GuardSource {
 
   /**
    * Brings every partition from the common time to `target`, or to the earliest
-   * guard crossing before it. A partition that went past that crossing is rolled
-   * back and re-run to it, so all partitions meet at the same instant.
+   * guard crossing before it. Partitions take their steps in time order (the one
+   * furthest behind steps next), so when one finds a crossing every other partition
+   * has at most its last step beyond it: that step is undone and re-run to the
+   * crossing, and all partitions meet at the same instant.
    */
   private advanceAll(target: number): number {
     let horizon = target;
-    for (const p of this.partitions) p.snapshot();
-    for (let pass = 0; ; pass += 1) {
-      for (const p of this.partitions) {
-        if (p.time > horizon + 1e-12) p.restore();
-        if (p.time < horizon - 1e-12) p.advanceTo(horizon);
-        if (p.crossed.length && p.time < horizon - 1e-12) horizon = p.time;
+    const partitions = this.partitions;
+    // Partitions still behind the horizon, in a binary heap by (time, index).
+    const heap = this.behind;
+    const before = (a: number, b: number) => {
+      const ta = partitions[a]!.time;
+      const tb = partitions[b]!.time;
+      return ta < tb || (ta === tb && a < b);
+    };
+    const push = (i: number) => {
+      let at = heap.length;
+      heap.push(i);
+      while (at > 0) {
+        const parent = (at - 1) >> 1;
+        if (!before(heap[at]!, heap[parent]!)) break;
+        [heap[at], heap[parent]] = [heap[parent]!, heap[at]!];
+        at = parent;
       }
-      if (this.partitions.every((p) => Math.abs(p.time - horizon) <= 1e-12)) return horizon;
-      if (pass > 50) throw new Error('partitions failed to meet at an event');
+    };
+    const pop = (): number => {
+      const top = heap[0]!;
+      const last = heap.pop()!;
+      if (heap.length) {
+        heap[0] = last;
+        let at = 0;
+        for (;;) {
+          const l = 2 * at + 1;
+          const r = l + 1;
+          let m = at;
+          if (l < heap.length && before(heap[l]!, heap[m]!)) m = l;
+          if (r < heap.length && before(heap[r]!, heap[m]!)) m = r;
+          if (m === at) break;
+          [heap[at], heap[m]] = [heap[m]!, heap[at]!];
+          at = m;
+        }
+      }
+      return top;
+    };
+    heap.length = 0;
+    for (let i = 0; i < partitions.length; i += 1) if (partitions[i]!.time < horizon - 1e-12) push(i);
+    while (heap.length) {
+      const index = pop();
+      const next = partitions[index]!;
+      next.snapshot();
+      next.advanceStep(horizon);
+      if (next.crossed.length && next.time < horizon - 1e-12) {
+        horizon = next.time;
+        heap.length = 0;
+        for (let i = 0; i < partitions.length; i += 1) {
+          const p = partitions[i]!;
+          if (p !== next && p.time > horizon + 1e-12) p.restore();
+          if (p.time < horizon - 1e-12) push(i);
+        }
+      } else if (next.time < horizon - 1e-12) push(index);
     }
+    return horizon;
   }
 
   private fireCrossings(): void {
@@ -336,8 +450,14 @@ class Run implements GuardSource {
   private readonly scratch = { flow: 0, dFlowdPa: 0, dFlowdPb: 0 };
 
   private record(out: Float64Array): void {
-    const w = this.w;
     for (const p of this.partitions) p.ensureFresh();
+    this.sampleInto(out);
+    this.sink.sample(this.time, out);
+  }
+
+  /** Every trace value as the world holds it now. */
+  private sampleInto(out: Float64Array): void {
+    const w = this.w;
     let i = 0;
     for (const p of this.m.portNodes) out[i++] = w.pressure[p.node]!;
     this.m.pistons.forEach((_, k) => {
@@ -356,6 +476,5 @@ class Run implements GuardSource {
       }
     }
     for (const b of this.m.behaviours) for (const value of Object.values(b.behaviour.signals?.() ?? {})) out[i++] = value;
-    this.sink.sample(this.time, out);
   }
 }

@@ -14,6 +14,11 @@ export class SparseLu {
   private readonly inv: Int32Array; // original index → order position
   private readonly slotOf = new Map<number, number>();
   private readonly diagSlot: Int32Array;
+  // The same lists flattened (pivot k owns entries ptr[k] … ptr[k + 1] − 1), for factor and solve.
+  private readonly ptr: Int32Array;
+  private readonly flatIndex: Int32Array;
+  private readonly flatLow: Int32Array;
+  private readonly flatUp: Int32Array;
   // For each pivot k: lower slots (i,k) and upper slots (k,j), both in order positions.
   private readonly lowRows: Int32Array[] = [];
   private readonly lowSlots: Int32Array[] = [];
@@ -83,6 +88,16 @@ export class SparseLu {
       }
     }
     this.updates = Int32Array.from(triples);
+    this.ptr = new Int32Array(size + 1);
+    for (let k = 0; k < size; k += 1) this.ptr[k + 1] = this.ptr[k]! + this.lowRows[k]!.length;
+    this.flatIndex = new Int32Array(this.ptr[size]!);
+    this.flatLow = new Int32Array(this.ptr[size]!);
+    this.flatUp = new Int32Array(this.ptr[size]!);
+    for (let k = 0; k < size; k += 1) {
+      this.flatIndex.set(this.lowRows[k]!, this.ptr[k]!);
+      this.flatLow.set(this.lowSlots[k]!, this.ptr[k]!);
+      this.flatUp.set(this.upSlots[k]!, this.ptr[k]!);
+    }
     this.values = new Float64Array(slots);
     this.work = new Float64Array(size);
   }
@@ -96,13 +111,17 @@ export class SparseLu {
   factor(): void {
     const v = this.values;
     const updates = this.updates;
+    const ptr = this.ptr;
+    const flatLow = this.flatLow;
+    const diag = this.diagSlot;
     let u = 0;
     for (let k = 0; k < this.size; k += 1) {
-      const pivot = v[this.diagSlot[k]!]!;
-      const low = this.lowSlots[k]!;
-      for (let a = 0; a < low.length; a += 1) v[low[a]!] = v[low[a]!]! / pivot;
-      const n = low.length * low.length;
-      for (let t = 0; t < n; t += 1, u += 3) v[updates[u]!] = v[updates[u]!]! - v[updates[u + 1]!]! * v[updates[u + 2]!]!;
+      const inverse = 1 / v[diag[k]!]!;
+      const from = ptr[k]!;
+      const to = ptr[k + 1]!;
+      for (let a = from; a < to; a += 1) v[flatLow[a]!] = v[flatLow[a]!]! * inverse;
+      const end = u + 3 * (to - from) * (to - from);
+      for (; u < end; u += 3) v[updates[u]!] = v[updates[u]!]! - v[updates[u + 1]!]! * v[updates[u + 2]!]!;
     }
   }
 
@@ -110,21 +129,25 @@ export class SparseLu {
   solve(b: Float64Array): void {
     const v = this.values;
     const w = this.work;
-    for (let k = 0; k < this.size; k += 1) w[k] = b[this.perm[k]!]!;
-    for (let k = 0; k < this.size; k += 1) {
-      const rows = this.lowRows[k]!;
-      const low = this.lowSlots[k]!;
+    const perm = this.perm;
+    const ptr = this.ptr;
+    const index = this.flatIndex;
+    const low = this.flatLow;
+    const up = this.flatUp;
+    const diag = this.diagSlot;
+    const size = this.size;
+    for (let k = 0; k < size; k += 1) w[k] = b[perm[k]!]!;
+    for (let k = 0; k < size; k += 1) {
       const wk = w[k]!;
-      for (let a = 0; a < rows.length; a += 1) w[rows[a]!] = w[rows[a]!]! - v[low[a]!]! * wk;
+      if (wk === 0) continue;
+      for (let a = ptr[k]!, to = ptr[k + 1]!; a < to; a += 1) w[index[a]!] = w[index[a]!]! - v[low[a]!]! * wk;
     }
-    for (let k = this.size - 1; k >= 0; k -= 1) {
-      const cols = this.upCols[k]!;
-      const up = this.upSlots[k]!;
+    for (let k = size - 1; k >= 0; k -= 1) {
       let sum = w[k]!;
-      for (let c = 0; c < cols.length; c += 1) sum -= v[up[c]!]! * w[cols[c]!]!;
-      w[k] = sum / v[this.diagSlot[k]!]!;
+      for (let c = ptr[k]!, to = ptr[k + 1]!; c < to; c += 1) sum -= v[up[c]!]! * w[index[c]!]!;
+      w[k] = sum / v[diag[k]!]!;
     }
-    for (let k = 0; k < this.size; k += 1) b[this.perm[k]!] = w[k]!;
+    for (let k = 0; k < size; k += 1) b[perm[k]!] = w[k]!;
   }
 }
 
