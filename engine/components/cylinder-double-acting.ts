@@ -53,6 +53,7 @@ export const cylinderDoubleActing: ComponentType = {
       viscousNsPerM: ctx.num('viscousFriction'),
       springPreloadN: 0,
       springRateNPerM: 0,
+      polytropicExponent: ctx.num('polytropicExponent'),
       startPositionM: Math.min(ctx.num('startPosition'), stroke),
     });
     const cushion = ctx.num('cushionLength');

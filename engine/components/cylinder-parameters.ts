@@ -18,4 +18,13 @@ export const cylinderParameters: Record<string, ParameterSpec> = {
   deadVolumeRod: { kind: 'number', quantity: 'volume', label: 'Dead volume, rod end', default: 3e-6, min: 1e-8, max: 0.01 },
   portConductance: { kind: 'number', quantity: 'conductance', label: 'Port sonic conductance C', default: 2e-8, min: 1e-11, max: 1e-6 },
   startPosition: { kind: 'number', quantity: 'length', label: 'Start position from retracted', default: 0, min: 0, max: 3 },
+  polytropicExponent: {
+    kind: 'number',
+    quantity: 'ratio',
+    label: 'Polytropic exponent of the chamber air',
+    default: 1,
+    min: 1,
+    max: 1.4,
+    description: '1 = isothermal (slow strokes, good heat exchange); 1.4 = adiabatic (fast strokes); 1.2–1.3 is often used between.',
+  },
 };

@@ -42,6 +42,7 @@ export const cylinderSingleActing: ComponentType = {
       viscousNsPerM: ctx.num('viscousFriction'),
       springPreloadN: ctx.num('springPreload'),
       springRateNPerM: ctx.num('springRate'),
+      polytropicExponent: ctx.num('polytropicExponent'),
       startPositionM: Math.min(ctx.num('startPosition'), ctx.num('stroke')),
     });
     return {};

@@ -91,6 +91,8 @@ export interface PistonSpec {
   springPreloadN: number;
   springRateNPerM: number;
   startPositionM: number;
+  /** Polytropic exponent of the gas in the chambers (1 = isothermal, default; 1.4 = adiabatic). */
+  polytropicExponent?: number;
 }
 
 /** What a behaviour can read and do while the simulation runs. */

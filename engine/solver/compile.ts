@@ -187,6 +187,9 @@ export function compile(document: CircuitDocument): CompileResult {
         const index = pistons.length - 1;
         nodes[spec.capNode.node]!.chambers.push({ piston: index, side: 'cap' });
         if (spec.rodNode) nodes[spec.rodNode.node]!.chambers.push({ piston: index, side: 'rod' });
+        for (const chamber of [spec.capNode, spec.rodNode]) {
+          if (chamber && spec.polytropicExponent !== undefined) nodes[chamber.node]!.polytropicExponent = spec.polytropicExponent;
+        }
         pistonOf.set(component.id, index);
         return { piston: index };
       },

@@ -10,6 +10,12 @@ export interface NodeModel {
   fixedPressurePa: number;
   /** Chambers whose volume follows a piston: V += area·(x or stroke − x) + dead volume. */
   chambers: Array<{ piston: number; side: 'cap' | 'rod' }>;
+  /**
+   * Polytropic exponent n of the gas in this node (1 = isothermal, 1.4 = adiabatic);
+   * absent means 1. The pressure follows p = p_amb·(ρ/ρ_amb)^n with ρ_amb the density of
+   * air at ambient pressure and temperature, so that dp/dt = n·p/m·ṁ − n·p/V·V̇.
+   */
+  polytropicExponent?: number;
 }
 
 export interface RestrictionModel extends Omit<RestrictionSpec, 'from' | 'to' | 'modulator'> {

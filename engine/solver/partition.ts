@@ -144,6 +144,8 @@ export class Partition {
   // Volume of each free node: fixed part plus chamber terms (piston, area coefficient, offset) in CSR form.
   private readonly nodeBaseVolume: Float64Array;
   private readonly chamberStart: Int32Array;
+  /** Polytropic exponent of each free node (1 = isothermal). */
+  private readonly nodeExponent: Float64Array;
   private readonly chamberPiston: Int32Array;
   private readonly chamberArea: Float64Array;
   private readonly chamberOffset: Float64Array;
@@ -229,6 +231,7 @@ export class Partition {
     this.pIndex = Int32Array.from(spec.pistons);
     this.rLinearPhi = Float64Array.from(spec.restrictions, (r) => isoLinearRegionPhi(restrictions[r]!.criticalRatio, 0.5, LINEAR_EPSILON));
     this.nodeBaseVolume = Float64Array.from(spec.freeNodes, (node) => nodes[node]!.volumeM3);
+    this.nodeExponent = Float64Array.from(spec.freeNodes, (node) => nodes[node]!.polytropicExponent ?? 1);
     this.chamberStart = new Int32Array(spec.freeNodes.length + 1);
     const cPiston: number[] = [];
     const cArea: number[] = [];
@@ -612,6 +615,7 @@ export class Partition {
     const volume = w.volume;
     const position = w.position;
     const rt = w.rt;
+    const ambient = w.model.ambientPa;
     const start = this.chamberStart;
     for (let i = 0; i < free.length; i += 1) {
       const node = free[i]!;
@@ -624,7 +628,18 @@ export class Partition {
       volume[node] = v;
       const m = y[i]!;
       if (m <= 0) physical = false;
-      pressure[node] = ((m > 1e-15 ? m : 1e-15) * rt) / v;
+      const mass = m > 1e-15 ? m : 1e-15;
+      const isothermal = (mass * rt) / v;
+      const n = this.nodeExponent[i]!;
+      if (n === 1) {
+        pressure[node] = isothermal;
+        w.pressurePerMass[node] = rt / v;
+      } else {
+        // Polytropic: p = p_amb·(ρ/ρ_amb)^n, and ρ/ρ_amb is the isothermal pressure over p_amb.
+        const p = ambient * Math.pow(isothermal / ambient, n);
+        pressure[node] = p;
+        w.pressurePerMass[node] = (n * p) / mass;
+      }
     }
     f.fill(0);
     const scratch = this.scratch;
@@ -757,17 +772,18 @@ export class Partition {
     return { lu, slots: { diag, restriction, chamberX, modulator, piston } };
   }
 
-  /** ∂p/∂m of a node (0 for boundary nodes). */
+  /** ∂p/∂m of a node (0 for boundary nodes): n·p/m, which is RT/V when isothermal. */
   private dpdm(node: number): number {
-    return this.w.model.nodes[node]!.fixed ? 0 : this.w.rt / this.w.volume[node]!;
+    return this.w.model.nodes[node]!.fixed ? 0 : this.w.pressurePerMass[node]!;
   }
 
-  /** ∂p/∂x of a node through the chamber of piston k. */
+  /** ∂p/∂x of a node through the chamber of piston k: −n·p/V·∂V/∂x. */
   private dpdx(node: number, k: number): number {
     const p = this.w.model.pistons[k]!;
+    const n = this.w.model.nodes[node]!.polytropicExponent ?? 1;
     let dv = 0;
     for (const c of this.w.model.nodes[node]!.chambers) if (c.piston === k) dv += c.side === 'cap' ? p.capArea : -p.rodSideArea;
-    return (-this.w.pressure[node]! / this.w.volume[node]!) * dv;
+    return ((-n * this.w.pressure[node]!) / this.w.volume[node]!) * dv;
   }
 
   /** W = I − γhJ at the committed state (the world's work arrays must describe it). */
@@ -775,7 +791,6 @@ export class Partition {
     const v = this.lu.values;
     const c = -GAMMA * h;
     const w = this.w;
-    const rt = w.rt;
     v.fill(0);
     const diag = this.slots.diag;
     for (let i = 0; i < diag.length; i += 1) v[diag[i]!] = 1;
@@ -786,8 +801,8 @@ export class Partition {
       const from = this.rFromNode[j]!;
       const to = this.rToNode[j]!;
       // dm_from/dt = −q and dm_to/dt = +q; ∂p/∂m = RT/V on free nodes, 0 on boundaries.
-      const ja = this.rFromFree[j] ? (w.dFlowA[r]! * rt) / w.volume[from]! : 0;
-      const jb = this.rToFree[j] ? (w.dFlowB[r]! * rt) / w.volume[to]! : 0;
+      const ja = this.rFromFree[j] ? w.dFlowA[r]! * w.pressurePerMass[from]! : 0;
+      const jb = this.rToFree[j] ? w.dFlowB[r]! * w.pressurePerMass[to]! : 0;
       v[slots[0]!] = v[slots[0]!]! - c * ja;
       v[slots[2]!] = v[slots[2]!]! + c * ja;
       v[slots[1]!] = v[slots[1]!]! - c * jb;

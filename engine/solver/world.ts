@@ -15,6 +15,8 @@ export class World {
   readonly rt: number;
   readonly pressure: Float64Array;
   readonly volume: Float64Array;
+  /** ∂p/∂m of each free node at the last evaluation, Pa/kg (RT/V when isothermal, n·p/m when polytropic). */
+  readonly pressurePerMass: Float64Array;
   readonly fixedPressure: Float64Array;
   readonly opening: Float64Array;
   readonly gain: Float64Array;
@@ -36,6 +38,7 @@ export class World {
     const np = model.pistons.length;
     this.pressure = Float64Array.from(model.nodes, (n) => (n.fixed ? n.fixedPressurePa : model.ambientPa));
     this.volume = new Float64Array(nn);
+    this.pressurePerMass = new Float64Array(nn);
     this.fixedPressure = Float64Array.from(model.nodes, (n) => n.fixedPressurePa);
     this.opening = Float64Array.from(model.restrictions, (r) => r.opening);
     this.gain = Float64Array.from(model.restrictions, (r) => chokedGain(r.conductance, model.temperatureK));
