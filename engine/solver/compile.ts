@@ -1,6 +1,6 @@
 import { tubeVolume } from '../calc/tube';
 import { componentTypeById } from '../components/registry';
-import type { ActuationLink, BuildContext, ComponentType, NodeRef, PistonSpec, RestrictionSpec } from '../components/types';
+import { parameterDefaults, type ActuationLink, type BuildContext, type ComponentType, type NodeRef, type PistonSpec, type RestrictionSpec } from '../components/types';
 import type { CircuitDocument } from '../document/schema';
 import type { Diagnostic, NodeModel, PistonModel, RestrictionModel, SolverModel } from './model';
 
@@ -122,7 +122,7 @@ export function compile(document: CircuitDocument): CompileResult {
 
   for (const component of ordered) {
     const type = types.get(component.id)!;
-    const params = { ...Object.fromEntries(Object.entries(type.parameters).map(([k, s]) => [k, s.default])), ...component.parameters };
+    const params = { ...parameterDefaults(type), ...component.parameters };
     const portNode = (portId: string): NodeRef => {
       const k = key(component.id, portId);
       const root = uf.find(k);
