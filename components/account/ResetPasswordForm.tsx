@@ -1,17 +1,16 @@
 'use client';
 
+import { NewPasswordField } from '@/components/account/NewPasswordField';
 import { useMutation } from '@tanstack/react-query';
 import type { FormEvent } from 'react';
 import { ApiError } from '@/components/api/api-error';
 import { sendJson } from '@/components/api/request-json';
 import { FormAlert } from '@/components/forms/FormAlert';
-import { TextField } from '@/components/forms/TextField';
 import { useFormErrors, type FieldErrors } from '@/components/forms/use-form-errors';
 import { Button } from '@/components/ui/Button';
 import { ButtonLink } from '@/components/ui/ButtonLink';
 import { TextLink } from '@/components/ui/TextLink';
 import { confirmationProblem, newPasswordProblem } from './password-rules';
-import { PasswordRules } from './PasswordRules';
 
 const FIELDS = ['password', 'passwordConfirm'] as const;
 type Field = (typeof FIELDS)[number];
@@ -56,25 +55,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   return (
     <form ref={formRef} noValidate onSubmit={handleSubmit} className="space-y-5">
-      <TextField
-        name="password"
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        required
-        hint={<PasswordRules />}
-        error={errors.fields.password}
-        data-testid="reset-password"
-      />
-      <TextField
-        name="passwordConfirm"
-        label="New password again"
-        type="password"
-        autoComplete="new-password"
-        required
-        error={errors.fields.passwordConfirm}
-        data-testid="reset-password-confirm"
-      />
+      <NewPasswordField name="password" label="New password" error={errors.fields.password} data-testid="reset-password" />
+      <NewPasswordField name="passwordConfirm" label="New password again" error={errors.fields.passwordConfirm} data-testid="reset-password-confirm" />
 
       {errors.form ? (
         <FormAlert tone="error">

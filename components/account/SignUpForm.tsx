@@ -1,5 +1,6 @@
 'use client';
 
+import { NewPasswordField } from '@/components/account/NewPasswordField';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
@@ -13,7 +14,6 @@ import { useFormErrors, type FieldErrors } from '@/components/forms/use-form-err
 import { Button } from '@/components/ui/Button';
 import { TextLink } from '@/components/ui/TextLink';
 import { confirmationProblem, newPasswordProblem } from './password-rules';
-import { PasswordRules } from './PasswordRules';
 
 const FIELDS = ['name', 'email', 'password', 'passwordConfirm'] as const;
 type Field = (typeof FIELDS)[number];
@@ -95,25 +95,8 @@ export function SignUpForm() {
         error={errors.fields.email}
         data-testid="signup-email"
       />
-      <TextField
-        name="password"
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        required
-        hint={<PasswordRules />}
-        error={errors.fields.password}
-        data-testid="signup-password"
-      />
-      <TextField
-        name="passwordConfirm"
-        label="Password again"
-        type="password"
-        autoComplete="new-password"
-        required
-        error={errors.fields.passwordConfirm}
-        data-testid="signup-password-confirm"
-      />
+      <NewPasswordField name="password" label="Password" error={errors.fields.password} data-testid="signup-password" />
+      <NewPasswordField name="passwordConfirm" label="Password again" error={errors.fields.passwordConfirm} data-testid="signup-password-confirm" />
 
       {errors.form ? <FormAlert tone="error">{errors.form}</FormAlert> : null}
 

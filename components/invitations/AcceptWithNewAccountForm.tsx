@@ -1,10 +1,10 @@
 'use client';
 
+import { NewPasswordField } from '@/components/account/NewPasswordField';
 import { useMutation } from '@tanstack/react-query';
 import { signIn } from 'next-auth/react';
 import type { FormEvent } from 'react';
 import { newPasswordProblem } from '@/components/account/password-rules';
-import { PasswordRules } from '@/components/account/PasswordRules';
 import { signInFailureMessage } from '@/components/auth/sign-in-failure-message';
 import { FormAlert } from '@/components/forms/FormAlert';
 import { TextField } from '@/components/forms/TextField';
@@ -79,16 +79,7 @@ export function AcceptWithNewAccountForm({ token, invitation, signedInEmail }: A
         error={errors.fields.name}
         data-testid="invite-name"
       />
-      <TextField
-        name="password"
-        label="Choose a password"
-        type="password"
-        autoComplete="new-password"
-        required
-        hint={<PasswordRules />}
-        error={errors.fields.password}
-        data-testid="invite-password"
-      />
+      <NewPasswordField name="password" label="Choose a password" error={errors.fields.password} data-testid="invite-password" />
 
       {errors.form ? <FormAlert tone="error">{errors.form}</FormAlert> : null}
 
