@@ -1,13 +1,16 @@
 // `npm run db:seed`: creates the demo workspace, one user per role and the demo
-// circuits. Idempotent: what exists already is left as it is.
+// circuits. Idempotent: what exists already is left as it is, except that a demo
+// circuit whose file has changed gets a new revision with the file's document.
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
+import { isDeepStrictEqual } from 'node:util';
 import { circuitDocumentSchema } from '@/engine/document/schema';
 import { DEMO_CIRCUITS, DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE } from '@/demo/plant';
 import { hashPassword } from '@/lib/auth/password';
+import { appendRevision } from '@/lib/circuits/append-revision';
 import { createCircuit } from '@/lib/circuits/create-circuit';
 import { closeSequelize, getSequelize } from '@/lib/db';
-import { Circuit, Membership, User, Workspace } from '@/models';
+import { Circuit, CircuitRevision, Membership, User, Workspace } from '@/models';
 
 async function main(): Promise<void> {
   getSequelize();
@@ -23,12 +26,29 @@ async function main(): Promise<void> {
     userIdByRole.set(demo.role, user.id);
   }
   let created = 0;
+  let revised = 0;
   for (const demo of DEMO_CIRCUITS) {
-    if (await Circuit.findOne({ where: { workspaceId: workspace.id, title: demo.title } })) continue;
     const raw: unknown = JSON.parse(await readFile(path.join(process.cwd(), 'demo', 'circuits', demo.file), 'utf8'));
     const document = circuitDocumentSchema.parse(raw);
     const authorId = userIdByRole.get(demo.author);
     if (!authorId) throw new Error(`no demo user with role ${demo.author}`);
+    const existing = await Circuit.findOne({ where: { workspaceId: workspace.id, title: demo.title } });
+    if (existing) {
+      const current = existing.currentRevisionId ? await CircuitRevision.findByPk(existing.currentRevisionId) : null;
+      // jsonb does not keep key order, so compare structurally.
+      if (!isDeepStrictEqual(current?.document, document)) {
+        await appendRevision({
+          workspaceId: workspace.id,
+          circuitId: existing.id,
+          authorId,
+          document,
+          message: 'Demo set updated',
+          expectedLockVersion: existing.lockVersion,
+        });
+        revised += 1;
+      }
+      continue;
+    }
     await createCircuit({
       workspaceId: workspace.id,
       authorId,
@@ -36,7 +56,7 @@ async function main(): Promise<void> {
     });
     created += 1;
   }
-  console.log(`demo workspace "${workspace.name}": ${DEMO_USERS.length} users, ${created} circuits added`);
+  console.log(`demo workspace "${workspace.name}": ${DEMO_USERS.length} users, ${created} circuits added, ${revised} updated`);
 }
 
 main()

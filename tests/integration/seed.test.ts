@@ -1,0 +1,29 @@
+import { execFileSync } from 'node:child_process';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { DEMO_CIRCUITS, DEMO_USERS, DEMO_WORKSPACE } from '@/demo/plant';
+import { getSequelize } from '@/lib/db';
+
+const tsx = path.join(process.cwd(), 'node_modules', '.bin', 'tsx');
+const seed = () => execFileSync(tsx, ['--conditions=react-server', 'scripts/db-seed.ts'], { encoding: 'utf8', env: process.env });
+
+async function demoCounts(): Promise<{ users: number; circuits: number; revisions: number }> {
+  return (await getSequelize().query(
+    `select (select count(*)::int from memberships m join workspaces w on w.id = m.workspace_id where w.slug = :slug) as users,
+            (select count(*)::int from circuits c join workspaces w on w.id = c.workspace_id where w.slug = :slug) as circuits,
+            (select count(*)::int from circuit_revisions r join circuits c on c.id = r.circuit_id join workspaces w on w.id = c.workspace_id where w.slug = :slug) as revisions`,
+    { plain: true, replacements: { slug: DEMO_WORKSPACE.slug } },
+  )) as { users: number; circuits: number; revisions: number };
+}
+
+describe('demo seed', () => {
+  it('creates the demo workspace once and changes nothing when run again', async () => {
+    seed();
+    const first = await demoCounts();
+    expect(first.users).toBe(DEMO_USERS.length);
+    expect(first.circuits).toBe(DEMO_CIRCUITS.length);
+    expect(first.revisions).toBeGreaterThanOrEqual(DEMO_CIRCUITS.length);
+    expect(seed()).toContain('0 circuits added, 0 updated');
+    expect(await demoCounts()).toEqual(first);
+  }, 60_000);
+});
