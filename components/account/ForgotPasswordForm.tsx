@@ -1,11 +1,11 @@
 'use client';
 
+import { EmailField } from '@/components/forms/EmailField';
 import { useMutation } from '@tanstack/react-query';
 import type { FormEvent } from 'react';
 import { sendJson } from '@/components/api/request-json';
 import { emailProblem } from '@/components/forms/email-problem';
 import { FormAlert } from '@/components/forms/FormAlert';
-import { TextField } from '@/components/forms/TextField';
 import { useFormErrors } from '@/components/forms/use-form-errors';
 import { Button } from '@/components/ui/Button';
 
@@ -30,23 +30,14 @@ export function ForgotPasswordForm() {
     return (
       <FormAlert tone="success">
         If an account uses <strong className="font-semibold">{request.variables}</strong>, an e-mail with a
-        link to choose a new password is on its way. The link works once and expires after a short while.
+        link to choose a new password is on its way. The link works once and expires after an hour.
       </FormAlert>
     );
   }
 
   return (
     <form ref={formRef} noValidate onSubmit={handleSubmit} className="space-y-5">
-      <TextField
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        required
-        error={errors.fields.email}
-        data-testid="forgot-email"
-      />
+      <EmailField error={errors.fields.email} data-testid="forgot-email" />
 
       {errors.form ? <FormAlert tone="error">{errors.form}</FormAlert> : null}
 

@@ -1,5 +1,7 @@
 'use client';
 
+import { PersonNameField } from '@/components/forms/PersonNameField';
+import { EmailField } from '@/components/forms/EmailField';
 import { NewPasswordField } from '@/components/account/NewPasswordField';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { signIn } from 'next-auth/react';
@@ -9,7 +11,6 @@ import { sendJson } from '@/components/api/request-json';
 import { signInFailureMessage } from '@/components/auth/sign-in-failure-message';
 import { emailProblem } from '@/components/forms/email-problem';
 import { FormAlert } from '@/components/forms/FormAlert';
-import { TextField } from '@/components/forms/TextField';
 import { useFormErrors, type FieldErrors } from '@/components/forms/use-form-errors';
 import { Button } from '@/components/ui/Button';
 import { TextLink } from '@/components/ui/TextLink';
@@ -77,24 +78,8 @@ export function SignUpForm() {
 
   return (
     <form ref={formRef} noValidate onSubmit={handleSubmit} className="space-y-5">
-      <TextField
-        name="name"
-        label="Your name"
-        autoComplete="name"
-        required
-        error={errors.fields.name}
-        data-testid="signup-name"
-      />
-      <TextField
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        required
-        error={errors.fields.email}
-        data-testid="signup-email"
-      />
+      <PersonNameField error={errors.fields.name} data-testid="signup-name" />
+      <EmailField error={errors.fields.email} data-testid="signup-email" />
       <NewPasswordField name="password" label="Password" error={errors.fields.password} data-testid="signup-password" />
       <NewPasswordField name="passwordConfirm" label="Password again" error={errors.fields.passwordConfirm} data-testid="signup-password-confirm" />
 

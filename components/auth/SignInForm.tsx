@@ -1,5 +1,6 @@
 'use client';
 
+import { EmailField } from '@/components/forms/EmailField';
 import { useQueryClient } from '@tanstack/react-query';
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
@@ -60,16 +61,7 @@ export function SignInForm({ callbackUrl }: SignInFormProps) {
 
   return (
     <form ref={formRef} noValidate onSubmit={handleSubmit} className="space-y-5">
-      <TextField
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="username"
-        inputMode="email"
-        required
-        error={errors.fields.email}
-        data-testid="signin-email"
-      />
+      <EmailField autoComplete="username" error={errors.fields.email} data-testid="signin-email" />
       <TextField
         name="password"
         label="Password"

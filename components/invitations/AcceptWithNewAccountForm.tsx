@@ -1,5 +1,6 @@
 'use client';
 
+import { PersonNameField } from '@/components/forms/PersonNameField';
 import { NewPasswordField } from '@/components/account/NewPasswordField';
 import { useMutation } from '@tanstack/react-query';
 import { signIn } from 'next-auth/react';
@@ -7,7 +8,6 @@ import type { FormEvent } from 'react';
 import { newPasswordProblem } from '@/components/account/password-rules';
 import { signInFailureMessage } from '@/components/auth/sign-in-failure-message';
 import { FormAlert } from '@/components/forms/FormAlert';
-import { TextField } from '@/components/forms/TextField';
 import { useFormErrors, type FieldErrors } from '@/components/forms/use-form-errors';
 import { Button } from '@/components/ui/Button';
 import { TextLink } from '@/components/ui/TextLink';
@@ -71,14 +71,7 @@ export function AcceptWithNewAccountForm({ token, invitation, signedInEmail }: A
         Create your account for <strong className="font-semibold text-ink">{invitation.email}</strong> to join.
         {signedInEmail ? ` You will be signed out of ${signedInEmail}.` : null}
       </p>
-      <TextField
-        name="name"
-        label="Your name"
-        autoComplete="name"
-        required
-        error={errors.fields.name}
-        data-testid="invite-name"
-      />
+      <PersonNameField error={errors.fields.name} data-testid="invite-name" />
       <NewPasswordField name="password" label="Choose a password" error={errors.fields.password} data-testid="invite-password" />
 
       {errors.form ? <FormAlert tone="error">{errors.form}</FormAlert> : null}

@@ -1,12 +1,12 @@
 'use client';
 
+import { EmailField } from '@/components/forms/EmailField';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useId, type FormEvent } from 'react';
 import { selectClassName } from '@/components/forms/control-styles';
 import { emailProblem } from '@/components/forms/email-problem';
 import { FormAlert } from '@/components/forms/FormAlert';
 import { FormField } from '@/components/forms/FormField';
-import { TextField } from '@/components/forms/TextField';
 import { useFormErrors } from '@/components/forms/use-form-errors';
 import { Button } from '@/components/ui/Button';
 import { ROLE_LABELS, WORKSPACE_ROLES, type WorkspaceRole } from '@/components/workspace/roles';
@@ -51,16 +51,7 @@ export function InviteMemberForm() {
         </h2>
         <p className="mt-0.5 text-sm text-ink-soft">They get an e-mail with a link to join this workspace.</p>
       </div>
-      <TextField
-        name="email"
-        label="E-mail"
-        type="email"
-        autoComplete="off"
-        inputMode="email"
-        required
-        error={errors.fields.email}
-        data-testid="invite-email"
-      />
+      <EmailField autoComplete="off" error={errors.fields.email} data-testid="invite-email" />
       <FormField name="role" label="Role" error={errors.fields.role}>
         {(control) => (
           <select {...control} defaultValue="engineer" className={selectClassName} data-testid="invite-role">
