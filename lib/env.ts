@@ -10,9 +10,6 @@ const envSchema = z.object({
   SMTP_URL: z.string().default('smtp://127.0.0.1:2525'),
   MAILBOX_URL: z.string().optional(),
   MAIL_FROM: z.string().default('Airproof <no-reply@airproof.local>'),
-  S3_ENDPOINT: z.string().optional(),
-  S3_BUCKET: z.string().default('airproof'),
-  S3_REGION: z.string().default('us-east-1'),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

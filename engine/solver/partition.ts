@@ -267,7 +267,8 @@ export class Partition {
     this.u = Array.from({ length: ROS34PW2.stages }, () => new Float64Array(n));
     this.massScaleOf = new Float64Array(this.nMass);
     this.snapY = new Float64Array(n);
-    spec.freeNodes.forEach((node, i) => (this.y[i] = (world.pressure[node]! * world.volume[node]!) / world.rt));
+    // Every free node starts at the pressure the world gives it (ambient), as an isothermal mass.
+    spec.freeNodes.forEach((node, i) => (this.y[i] = (world.pressure[node]! * this.freeNodeVolume(i)) / world.rt));
     spec.pistons.forEach((k, j) => (this.y[this.xIndex[j]!] = world.position[k]!));
     this.quiescent = n === 0;
     const built = this.buildPattern();
@@ -606,6 +607,18 @@ export class Partition {
     }
   }
 
+  /** Volume of free node i (fixed part plus chambers at the world's piston positions), m³. */
+  private freeNodeVolume(i: number): number {
+    const position = this.w.position;
+    let v = this.nodeBaseVolume[i]!;
+    for (let c = this.chamberStart[i]!; c < this.chamberStart[i + 1]!; c += 1) {
+      const x = position[this.chamberPiston[c]!]!;
+      const stroke = this.chamberStroke[c]!;
+      v += this.chamberOffset[c]! + this.chamberArea[c]! * (x < 0 ? 0 : x > stroke ? stroke : x);
+    }
+    return v;
+  }
+
   /** Pressures, flows and derivatives at y (positions already written); false if a mass went negative. */
   private evaluate(y: Float64Array, f: Float64Array): boolean {
     const w = this.w;
@@ -613,18 +626,11 @@ export class Partition {
     let physical = true;
     const free = this.spec.freeNodes;
     const volume = w.volume;
-    const position = w.position;
     const rt = w.rt;
     const ambient = w.model.ambientPa;
-    const start = this.chamberStart;
     for (let i = 0; i < free.length; i += 1) {
       const node = free[i]!;
-      let v = this.nodeBaseVolume[i]!;
-      for (let c = start[i]!; c < start[i + 1]!; c += 1) {
-        const x = position[this.chamberPiston[c]!]!;
-        const stroke = this.chamberStroke[c]!;
-        v += this.chamberOffset[c]! + this.chamberArea[c]! * (x < 0 ? 0 : x > stroke ? stroke : x);
-      }
+      const v = this.freeNodeVolume(i);
       volume[node] = v;
       const m = y[i]!;
       if (m <= 0) physical = false;

@@ -6,7 +6,6 @@ import { buildPartitions } from './partitioning';
 import { OutputKind, Partition, type GuardSource, type OutputRows } from './partition';
 import { World } from './world';
 
-export { EVENT_TOLERANCE_S } from './partition';
 
 /** A timed input: press, release or toggle a manual actuator, or change a setting. */
 export interface InputEvent extends InputCommand {

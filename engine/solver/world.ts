@@ -50,19 +50,6 @@ export class World {
     this.velocity = new Float64Array(np);
     this.mode = model.pistons.map((p, k) => (this.position[k]! <= 0 ? 'end-min' : this.position[k]! >= p.strokeM ? 'end-max' : 'stuck'));
     this.direction = new Float64Array(np);
-    for (let i = 0; i < nn; i += 1) this.volume[i] = this.nodeVolume(i);
-  }
-
-  /** Volume of node i with its chambers at the current piston positions, m³. */
-  nodeVolume(i: number): number {
-    const node = this.model.nodes[i]!;
-    let v = node.volumeM3;
-    for (const c of node.chambers) {
-      const p = this.model.pistons[c.piston]!;
-      const x = Math.min(Math.max(this.position[c.piston]!, 0), p.strokeM);
-      v += c.side === 'cap' ? p.deadVolumeCapM3 + p.capArea * x : p.deadVolumeRodM3 + p.rodSideArea * (p.strokeM - x);
-    }
-    return v;
   }
 
   /** Net force on piston k towards extension, without friction, from the current pressures, N. */

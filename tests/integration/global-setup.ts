@@ -4,9 +4,7 @@ import path from 'node:path';
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { createMigrator } from '@/lib/migrator';
 import { startMailCatcher, type MailCatcher } from '@/scripts/local/mail-catcher';
-
-const TEST_SMTP_URL = 'smtp://127.0.0.1:2625';
-const TEST_MAILBOX_URL = 'http://127.0.0.1:2680';
+import { applyTestEnvDefaults } from './test-env';
 
 /**
  * Brings the test database (DATABASE_URL from `npm test`) to the newest schema and
@@ -19,12 +17,11 @@ export default async function setup(): Promise<() => Promise<void>> {
   await createMigrator(getSequelize()).up();
   await closeSequelize();
 
-  process.env.SMTP_URL ??= TEST_SMTP_URL;
-  process.env.MAILBOX_URL ??= TEST_MAILBOX_URL;
+  applyTestEnvDefaults();
   const directory = await mkdtemp(path.join(os.tmpdir(), 'airproof-mail-'));
   const catcher: MailCatcher = await startMailCatcher({
-    smtpPort: Number(new URL(process.env.SMTP_URL).port),
-    httpPort: Number(new URL(process.env.MAILBOX_URL).port),
+    smtpPort: Number(new URL(process.env.SMTP_URL!).port),
+    httpPort: Number(new URL(process.env.MAILBOX_URL!).port),
     directory,
   });
   return async () => {
