@@ -1,16 +1,7 @@
 import 'server-only';
 import { serverEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
-
-export interface MailboxMessage {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-}
+import type { MailboxMessage } from '@/lib/mail/mailbox-message';
 
 /** Messages held by the local mail catcher; absent in production, where MAILBOX_URL is unset. */
 export async function listCaughtMail(): Promise<MailboxMessage[]> {

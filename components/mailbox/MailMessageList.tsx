@@ -1,8 +1,8 @@
 import { ChangeTime } from '@/components/circuits/ChangeTime';
-import type { CaughtMessage } from './mailbox-api';
+import type { MailboxMessage } from '@/lib/mail/mailbox-message';
 
 type MailMessageListProps = {
-  messages: readonly CaughtMessage[];
+  messages: readonly MailboxMessage[];
   selectedId: string | null;
   onSelect: (id: string) => void;
 };

@@ -1,9 +1,9 @@
 import { formatAbsoluteTime } from '@/components/circuits/format-change-time';
 import { HtmlPartFrame } from './HtmlPartFrame';
 import { LinkedText } from './LinkedText';
-import type { CaughtMessage } from './mailbox-api';
+import type { MailboxMessage } from '@/lib/mail/mailbox-message';
 
-export function MailMessageView({ message }: { message: CaughtMessage }) {
+export function MailMessageView({ message }: { message: MailboxMessage }) {
   return (
     <article className="space-y-4 rounded-lg border border-rule bg-paper-raised p-4 sm:p-5">
       <header>

@@ -6,16 +6,8 @@ import http from 'node:http';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+import type { MailboxMessage } from '@/lib/mail/mailbox-message';
 
-export interface CaughtMessage {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-}
 
 export interface MailCatcher {
   close(): Promise<void>;
@@ -23,9 +15,9 @@ export interface MailCatcher {
 
 export async function startMailCatcher({ smtpPort, httpPort, directory }: { smtpPort: number; httpPort: number; directory: string }): Promise<MailCatcher> {
   await mkdir(directory, { recursive: true });
-  const messages: CaughtMessage[] = [];
+  const messages: MailboxMessage[] = [];
   for (const file of (await readdir(directory)).filter((f) => f.endsWith('.json')).sort()) {
-    messages.push(JSON.parse(await readFile(path.join(directory, file), 'utf8')) as CaughtMessage);
+    messages.push(JSON.parse(await readFile(path.join(directory, file), 'utf8')) as MailboxMessage);
   }
 
   const smtp = new SMTPServer({
@@ -35,7 +27,7 @@ export async function startMailCatcher({ smtpPort, httpPort, directory }: { smtp
     onData(stream, session, callback) {
       simpleParser(stream)
         .then(async (parsed) => {
-          const message: CaughtMessage = {
+          const message: MailboxMessage = {
             id: randomUUID(),
             receivedAt: new Date().toISOString(),
             from: parsed.from?.text ?? session.envelope.mailFrom?.toString() ?? '',

@@ -1,4 +1,4 @@
-import type { MailboxMessage } from '@/lib/mailbox';
+import type { MailboxMessage } from '@/lib/mail/mailbox-message';
 
 /** Messages the local catcher holds for one address, newest first. */
 export async function mailTo(address: string): Promise<MailboxMessage[]> {
