@@ -127,7 +127,7 @@ export interface Behaviour {
   onInput?(command: InputCommand, api: RuntimeApi): void;
   /** Runs once at t = 0 after every component is built. */
   start?(api: RuntimeApi): void;
-  /** Discrete signals for the trace (valve position index, actuated flags). */
+  /** Discrete signals for the trace (valve position index, actuated flags); they change only in the behaviour's own callbacks. */
   signals?(): Record<string, number>;
 }
 

@@ -157,7 +157,7 @@ export function compile(document: CircuitDocument): CompileResult {
       connected: (id) => connectedPorts.has(key(component.id, id)),
       internalNode: (name, volumeM3) => ({ node: addNode(nodes, { name: `${component.tag}:${name}`, volumeM3, fixed: false, fixedPressurePa: 0, chambers: [] }) }),
       atmosphere: () => ({ node: atmosphere }),
-      fixedPressure: (name, pressurePa) => ({ node: addNode(nodes, { name: `${component.tag}:${name}`, volumeM3: 0, fixed: true, fixedPressurePa: pressurePa, chambers: [] }) }),
+      fixedPressure: (name, pressurePa) => ({ node: addNode(nodes, { name: `${component.tag}:${name}`, volumeM3: 0, fixed: true, fixedPressurePa: pressurePa, chambers: [], holder: component.id }) }),
       holdPort: (id, pressurePa) => {
         const ref = portNode(id);
         const node = nodes[ref.node]!;
@@ -166,6 +166,7 @@ export function compile(document: CircuitDocument): CompileResult {
         }
         node.fixed = true;
         node.fixedPressurePa = pressurePa;
+        node.holder = component.id;
         return ref;
       },
       addVolume: (ref, v) => {

@@ -8,6 +8,8 @@ export interface NodeModel {
   /** Boundary nodes hold their pressure (atmosphere, ideal supplies). */
   fixed: boolean;
   fixedPressurePa: number;
+  /** Component that holds this boundary's pressure (an ideal supply) and may change it while running. */
+  holder?: string;
   /** Chambers whose volume follows a piston: V += area·(x or stroke − x) + dead volume. */
   chambers: Array<{ piston: number; side: 'cap' | 'rod' }>;
   /**

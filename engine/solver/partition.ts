@@ -182,6 +182,7 @@ export class Partition {
 
   private readonly snapY: Float64Array;
   private snapTime = 0;
+  private undoable = false;
   private snapH = 0;
   private snapQuiescent = false;
   private snapGuards: number[] = [];
@@ -358,7 +359,14 @@ export class Partition {
     }
   }
 
-  /** Guards must be recomputed before the next advance
+  /** Writes the committed outputs into pending row k: its time is now, and a discrete change may just have moved them. */
+  writeRow(k: number): void {
+    const row = this.rows?.row(k);
+    if (!row) return;
+    this.ensureFresh();
+    const cols = this.outCols;
+    for (let i = 0; i < cols.length; i += 1) row[cols[i]!] = this.outPrev[i]!;
+  }
 
   /** Makes the world's arrays describe this partition's committed state. */
   ensureFresh(): void {
@@ -376,6 +384,7 @@ export class Partition {
 
   /** Remembers the committed state, to undo the next step. */
   snapshot(): void {
+    this.undoable = true;
     this.snapTime = this.time;
     this.snapQuiescent = this.quiescent;
     if (this.quiescent) return;
@@ -386,6 +395,7 @@ export class Partition {
   }
 
   restore(): void {
+    this.undoable = false;
     this.time = this.snapTime;
     this.crossed = [];
     if (this.snapQuiescent) return;
@@ -395,6 +405,11 @@ export class Partition {
     this.guardValues = this.snapGuards;
     this.guardOwners = this.snapOwners;
     this.fValid = false;
+  }
+
+  /** The last step can still be undone (once). */
+  canUndo(): boolean {
+    return this.undoable;
   }
 
   /** Guard values at the committed state (the world must describe it). */

@@ -4,6 +4,7 @@ import { MemoryTraceSink, type SignalUnit, type Trace, type TraceSink } from '..
 import type { SolverModel } from './model';
 import { buildPartitions } from './partitioning';
 import { OutputKind, Partition, type GuardSource, type OutputRows } from './partition';
+import { TimeQueue } from './time-queue';
 import { World } from './world';
 
 
@@ -31,11 +32,14 @@ export interface SimulationOptions {
 }
 
 /**
- * Output rows kept pending between meeting points. Partitions step past output times
- * and fill their columns by interpolation; the rows go to the sink once every partition
- * has passed them. Meeting points are at least this often, which bounds the buffer.
+ * Output rows kept pending. Partitions step past output times and fill their
+ * columns by interpolation; a row goes to the sink once every partition has
+ * passed it. No partition steps beyond the last pending row.
  */
-const PENDING_ROWS = 64;
+const PENDING_ROWS = 128;
+
+/** Times closer than this are the same instant, s. */
+const SAME_TIME_S = 1e-12;
 
 interface Timer {
   t: number;
@@ -54,17 +58,32 @@ export function simulate(model: SolverModel, inputs: readonly InputEvent[], opti
   return new Run(model, options, sink).execute([...inputs].sort((a, b) => a.t - b.t));
 }
 
+/**
+ * Partitions keep their own time. Discrete happenings — inputs, timers, guard
+ * crossings — are handled one instant at a time, in time order, once every
+ * partition has reached that instant; but only the partitions the acting
+ * behaviours may read or change (their touch set) have to land on it exactly.
+ * The others may already be a step beyond, so a busy circuit does not cut every
+ * moving partition's step at every happening elsewhere. A partition is never
+ * more than one step beyond the earliest pending instant, and can undo that step
+ * when a newly found crossing or a new timer turns out to touch it.
+ */
 class Run implements GuardSource, OutputRows {
   private readonly m: SolverModel;
   private readonly w: World;
   private readonly partitions: Partition[];
   private readonly partitionOfRestriction: Int32Array;
   private readonly partitionOfPiston: Int32Array;
+  private readonly partitionOfFreeNode: Int32Array;
   private readonly partitionsOfFixedNode = new Map<number, number[]>();
   /** The partition whose guards each behaviour's guards belong to (-1: none). */
   private readonly partitionOfBehaviour: Int32Array;
-  /** Partitions holding each behaviour's passages and pistons: woken whenever the behaviour acts. */
+  /** Partitions holding each behaviour's passages and pistons. */
   private readonly partitionsOwnedBy: number[][];
+  /** Partitions holding each behaviour's pressure-modulated passages: woken whenever it acts, since it may have moved their set point. */
+  private readonly modulatedBy: number[][];
+  /** Partitions each behaviour may read or change when it acts: all of them for one that holds a boundary pressure. */
+  private readonly touchOf: Int32Array[];
   private readonly untilS: number;
   private readonly sink: TraceSink;
   private readonly memory: MemoryTraceSink | null;
@@ -72,16 +91,38 @@ class Run implements GuardSource, OutputRows {
   private readonly api: RuntimeApi;
   private readonly timers: Timer[] = [];
   private timerSeq = 0;
+  /** The instant being handled (or last handled). */
   private time = 0;
   private currentBehaviour = -1;
   private readonly initialBudget: number;
-  private readonly behind: number[] = [];
+  private readonly queue: TimeQueue;
+  /** Latest time each partition may step to: the earliest pending happening that touches it. */
+  private readonly cap: Float64Array;
+  private capsStale = true;
+  /** Partitions standing on a guard crossing not yet handled, and what each crossing touches. */
+  private crossing: number[] = [];
+  private readonly crossTouch: Array<readonly number[]>;
+  /** Times of the inputs that touch each partition, and the next one not yet handled. */
+  private readonly inputTimes: Float64Array[];
+  private readonly inputNext: Int32Array;
+  private inputs: InputEvent[] = [];
+  private inputCursor = 0;
+  /** Partitions standing on the instant being handled: only they may be read or changed. */
+  private readonly synced: Uint8Array;
+  private syncedList: number[] = [];
+  private handling = false;
   readonly intervalS: number;
   /** Ring of pending output rows; row k lives at k mod PENDING_ROWS while firstPending ≤ k < firstPending + PENDING_ROWS. */
   private readonly pending: Float64Array[] = [];
   private firstPending = 1;
   /** Columns that no partition fills: boundary pressures, passages between boundaries, behaviour signals. */
   private constantColumns = new Int32Array(0);
+  /** (column, node) pairs of port pressures held by boundaries, and (column, passage) pairs of passages between boundaries. */
+  private boundaryPortColumns = new Int32Array(0);
+  private boundaryFlowColumns = new Int32Array(0);
+  /** Each behaviour's signal values as of its last action, and where they start in a trace row. */
+  private readonly signalValues: Float64Array[];
+  private readonly signalColumn: Int32Array;
 
   constructor(model: SolverModel, options: SimulationOptions, sink?: TraceSink) {
     this.m = model;
@@ -97,11 +138,13 @@ class Run implements GuardSource, OutputRows {
     this.partitions = specs.map((spec) => new Partition(this.w, spec, tol, this));
     this.partitionOfRestriction = new Int32Array(model.restrictions.length).fill(-1);
     this.partitionOfPiston = new Int32Array(model.pistons.length).fill(-1);
+    this.partitionOfFreeNode = new Int32Array(model.nodes.length).fill(-1);
     this.partitionOfBehaviour = new Int32Array(model.behaviours.length).fill(-1);
     specs.forEach((spec, i) => {
       for (const b of spec.behaviours) this.partitionOfBehaviour[b] = i;
       for (const r of spec.restrictions) this.partitionOfRestriction[r] = i;
       for (const k of spec.pistons) this.partitionOfPiston[k] = i;
+      for (const node of spec.freeNodes) this.partitionOfFreeNode[node] = i;
       for (const node of new Set([...spec.fixedNodes, ...spec.watchedBoundaries])) {
         this.partitionsOfFixedNode.set(node, [...(this.partitionsOfFixedNode.get(node) ?? []), i]);
       }
@@ -116,6 +159,26 @@ class Run implements GuardSource, OutputRows {
       });
       return [...owned].sort((a, b) => a - b);
     });
+    this.modulatedBy = model.behaviours.map((entry) => [
+      ...new Set(model.restrictions.flatMap((r, index) => (r.owner === entry.componentId && r.modulator && this.partitionOfRestriction[index]! >= 0 ? [this.partitionOfRestriction[index]!] : []))),
+    ]);
+    const holders = new Set(model.nodes.flatMap((n) => (n.fixed && n.holder ? [n.holder] : [])));
+    const every = Int32Array.from(this.partitions.keys());
+    this.touchOf = model.behaviours.map((entry, b) => {
+      // A held boundary feeds partitions whose own behaviours then act at once: the whole circuit meets.
+      if (holders.has(entry.componentId)) return every;
+      const touched = new Set(this.partitionsOwnedBy[b]);
+      if (this.partitionOfBehaviour[b]! >= 0) touched.add(this.partitionOfBehaviour[b]!);
+      return Int32Array.from([...touched].sort((x, y) => x - y));
+    });
+    this.queue = new TimeQueue(this.partitions.length, (i) => this.partitions[i]!.time);
+    this.cap = new Float64Array(this.partitions.length);
+    this.crossTouch = this.partitions.map(() => []);
+    this.inputTimes = this.partitions.map(() => new Float64Array(0));
+    this.inputNext = new Int32Array(this.partitions.length);
+    this.synced = new Uint8Array(this.partitions.length);
+    this.signalValues = model.behaviours.map((b) => Float64Array.from(Object.values(b.behaviour.signals?.() ?? {})));
+    this.signalColumn = new Int32Array(model.behaviours.length);
     this.initialBudget = this.airBudget();
   }
 
@@ -127,10 +190,6 @@ class Run implements GuardSource, OutputRows {
   private assignColumns(width: number): void {
     const columns = this.partitions.map(() => ({ cols: [] as number[], kinds: [] as OutputKind[], sources: [] as number[] }));
     const owned = new Uint8Array(width);
-    const partitionOfNode = new Int32Array(this.m.nodes.length).fill(-1);
-    this.partitions.forEach((p, i) => {
-      for (const node of p.spec.freeNodes) partitionOfNode[node] = i;
-    });
     const claim = (partition: number, col: number, kind: OutputKind, source: number) => {
       if (partition < 0) return;
       columns[partition]!.cols.push(col);
@@ -139,12 +198,28 @@ class Run implements GuardSource, OutputRows {
       owned[col] = 1;
     };
     let col = 0;
-    for (const p of this.m.portNodes) claim(partitionOfNode[p.node]!, col++, OutputKind.Pressure, p.node);
+    const boundaryPorts: number[] = [];
+    const boundaryFlows: number[] = [];
+    for (const p of this.m.portNodes) {
+      if (this.partitionOfFreeNode[p.node]! < 0) boundaryPorts.push(col, p.node);
+      claim(this.partitionOfFreeNode[p.node]!, col++, OutputKind.Pressure, p.node);
+    }
     this.m.pistons.forEach((_, k) => {
       claim(this.partitionOfPiston[k]!, col++, OutputKind.Position, k);
       claim(this.partitionOfPiston[k]!, col++, OutputKind.Velocity, k);
     });
-    if (this.recordFlows) for (let r = 0; r < this.m.restrictions.length; r += 1) claim(this.partitionOfRestriction[r]!, col++, OutputKind.Flow, r);
+    if (this.recordFlows) {
+      for (let r = 0; r < this.m.restrictions.length; r += 1) {
+        if (this.partitionOfRestriction[r]! < 0) boundaryFlows.push(col, r);
+        claim(this.partitionOfRestriction[r]!, col++, OutputKind.Flow, r);
+      }
+    }
+    this.boundaryPortColumns = Int32Array.from(boundaryPorts);
+    this.boundaryFlowColumns = Int32Array.from(boundaryFlows);
+    this.m.behaviours.forEach((_, b) => {
+      this.signalColumn[b] = col;
+      col += this.signalValues[b]!.length;
+    });
     this.partitions.forEach((p, i) => p.setOutputs(columns[i]!.cols, columns[i]!.kinds, columns[i]!.sources, this));
     const constant: number[] = [];
     for (let c = 0; c < width; c += 1) if (!owned[c]) constant.push(c);
@@ -153,14 +228,17 @@ class Run implements GuardSource, OutputRows {
   }
 
   /**
-   * Sends the pending rows before `reached` to the sink. The columns no partition fills
-   * hold still between meeting points: they are taken from the world as it is now.
+   * Sends the pending rows at times up to `reached` (before it, unless `inclusive`) to the
+   * sink. Every partition has passed them; the columns no partition fills change only at
+   * handled instants, so they are taken as they are now.
    */
-  private flushRows(reached: number, sample: Float64Array): void {
-    if (this.firstPending * this.intervalS >= reached - 1e-12) return;
-    this.sampleInto(sample);
+  private flushRows(reached: number, inclusive: boolean, sample: Float64Array): void {
+    const limit = inclusive ? reached + SAME_TIME_S : reached - SAME_TIME_S;
+    const last = this.untilS - SAME_TIME_S;
+    if (this.firstPending * this.intervalS >= limit || this.firstPending * this.intervalS >= last) return;
+    this.sampleConstants(sample);
     const constant = this.constantColumns;
-    while (this.firstPending * this.intervalS < reached - 1e-12 && this.firstPending * this.intervalS < this.untilS - 1e-12) {
+    while (this.firstPending * this.intervalS < limit && this.firstPending * this.intervalS < last) {
       const k = this.firstPending;
       const row = this.pending[k % PENDING_ROWS]!;
       for (let i = 0; i < constant.length; i += 1) row[constant[i]!] = sample[constant[i]!]!;
@@ -174,115 +252,164 @@ class Run implements GuardSource, OutputRows {
     this.sink.begin(names);
     const sample = new Float64Array(names.length);
     this.assignColumns(names.length);
-    for (const p of this.partitions) p.refresh();
+    this.indexInputs(inputs);
+    // t = 0: every partition stands on it.
+    this.beginInstant(0);
     this.m.behaviours.forEach((_, i) => this.withBehaviour(i, (b) => b.start?.(this.api)));
     this.settle();
     // Conditions already true at the start count as having just become true.
     for (const p of this.partitions) p.crossed = p.guardValues.flatMap((g, i) => (i >= p.pistonGuardCount && g > 0 ? [i] : []));
     this.fireCrossings();
     this.settle();
+    this.endInstant();
     this.record(sample);
 
-    let inputCursor = 0;
-    while (this.time < this.untilS - 1e-12) {
-      // Partitions meet at inputs, timers and events (and often enough to bound the pending rows),
-      // not at every output time.
-      const lastPending = Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS);
-      const nextInput = inputs[inputCursor]?.t ?? Infinity;
-      const nextTimer = this.timers[0]?.t ?? Infinity;
-      const target = Math.max(Math.min(lastPending, nextInput, nextTimer), this.time);
-      const reached = this.advanceAll(target);
-      this.time = reached;
-      this.flushRows(reached, sample);
-      this.fireCrossings();
-      if (reached >= target - 1e-12) {
-        while (inputCursor < inputs.length && inputs[inputCursor]!.t <= this.time + 1e-12) this.applyInput(inputs[inputCursor++]!);
-        while (this.timers.length && this.timers[0]!.t <= this.time + 1e-12) {
-          const timer = this.timers.shift()!;
-          this.withBehaviour(timer.behaviour, (b) => b.onTimer?.(timer.tag, this.api));
-        }
+    const partitions = this.partitions;
+    for (;;) {
+      if (this.capsStale) this.refreshCaps();
+      const next = this.nextInstant();
+      const behind = this.queue.top();
+      const p = partitions[behind];
+      if (p && p.time < next - SAME_TIME_S) {
+        p.snapshot();
+        p.advanceStep(this.cap[behind]!);
+        this.queue.update(behind);
+        if (p.crossed.length) this.crossingFound(behind);
+        continue;
       }
-      this.settle();
-      const nextOutput = Math.min(this.firstPending * this.intervalS, this.untilS);
-      if (this.time >= nextOutput - 1e-12) {
-        this.record(sample);
-        this.firstPending += 1;
-      }
+      this.handle(next, sample);
+      if (next >= this.untilS - SAME_TIME_S) break;
     }
-    const steps = this.partitions.reduce((s, p) => s + p.steps, 0);
-    const rejectedSteps = this.partitions.reduce((s, p) => s + p.rejected, 0);
+    const steps = partitions.reduce((s, q) => s + q.steps, 0);
+    const rejectedSteps = partitions.reduce((s, q) => s + q.rejected, 0);
     const stats = { steps, rejectedSteps, massBalanceErrorKg: this.airBudget() - this.initialBudget };
     return this.memory ? this.memory.toTrace(this.intervalS, stats) : { formatVersion: 1, intervalS: this.intervalS, time: [], signals: [], events: [], stats };
   }
 
-  /**
-   * Brings every partition from the common time to `target`, or to the earliest
-   * guard crossing before it. Partitions take their steps in time order (the one
-   * furthest behind steps next), so when one finds a crossing every other partition
-   * has at most its last step beyond it: that step is undone and re-run to the
-   * crossing, and all partitions meet at the same instant.
-   */
-  private advanceAll(target: number): number {
-    let horizon = target;
-    const partitions = this.partitions;
-    // Partitions still behind the horizon, in a binary heap by (time, index).
-    const heap = this.behind;
-    const before = (a: number, b: number) => {
-      const ta = partitions[a]!.time;
-      const tb = partitions[b]!.time;
-      return ta < tb || (ta === tb && a < b);
-    };
-    const push = (i: number) => {
-      let at = heap.length;
-      heap.push(i);
-      while (at > 0) {
-        const parent = (at - 1) >> 1;
-        if (!before(heap[at]!, heap[parent]!)) break;
-        [heap[at], heap[parent]] = [heap[parent]!, heap[at]!];
-        at = parent;
-      }
-    };
-    const pop = (): number => {
-      const top = heap[0]!;
-      const last = heap.pop()!;
-      if (heap.length) {
-        heap[0] = last;
-        let at = 0;
-        for (;;) {
-          const l = 2 * at + 1;
-          const r = l + 1;
-          let m = at;
-          if (l < heap.length && before(heap[l]!, heap[m]!)) m = l;
-          if (r < heap.length && before(heap[r]!, heap[m]!)) m = r;
-          if (m === at) break;
-          [heap[at], heap[m]] = [heap[m]!, heap[at]!];
-          at = m;
-        }
-      }
-      return top;
-    };
-    heap.length = 0;
-    for (let i = 0; i < partitions.length; i += 1) if (partitions[i]!.time < horizon - 1e-12) push(i);
-    while (heap.length) {
-      const index = pop();
-      const next = partitions[index]!;
-      next.snapshot();
-      next.advanceStep(horizon);
-      if (next.crossed.length && next.time < horizon - 1e-12) {
-        horizon = next.time;
-        heap.length = 0;
-        for (let i = 0; i < partitions.length; i += 1) {
-          const p = partitions[i]!;
-          if (p !== next && p.time > horizon + 1e-12) p.restore();
-          if (p.time < horizon - 1e-12) push(i);
-        }
-      } else if (next.time < horizon - 1e-12) push(index);
+  /** Sorts the inputs' times by the partitions they touch, so each partition knows how far it may run. */
+  private indexInputs(inputs: InputEvent[]): void {
+    this.inputs = inputs;
+    const lists = this.partitions.map(() => [] as number[]);
+    for (const input of inputs) {
+      const b = this.m.componentIds.get(input.component);
+      if (b === undefined) continue;
+      for (const p of this.touchOf[b]!) lists[p]!.push(input.t);
     }
-    return horizon;
+    lists.forEach((list, p) => (this.inputTimes[p] = Float64Array.from(list)));
   }
 
+  /** The earliest instant with something to handle: an input, a timer, a crossing, the end of the pending rows. */
+  private nextInstant(): number {
+    let t = Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS);
+    if (this.inputCursor < this.inputs.length) t = Math.min(t, this.inputs[this.inputCursor]!.t);
+    if (this.timers.length) t = Math.min(t, this.timers[0]!.t);
+    for (const i of this.crossing) t = Math.min(t, this.partitions[i]!.time);
+    return t;
+  }
+
+  /**
+   * How far each partition may step: to the earliest pending input, timer or crossing that
+   * touches it, the end of the pending rows at most. A partition already beyond its limit
+   * (a new timer, a crossing just found) undoes its last step.
+   */
+  private refreshCaps(): void {
+    const cap = this.cap;
+    const partitions = this.partitions;
+    for (;;) {
+      this.capsStale = false;
+      this.crossing = this.crossing.filter((i) => partitions[i]!.crossed.length > 0);
+      cap.fill(Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS));
+      // Inputs before the cursor are handled; those at the cursor's time are not.
+      const unhandled = this.inputCursor < this.inputs.length ? this.inputs[this.inputCursor]!.t : Infinity;
+      for (let p = 0; p < partitions.length; p += 1) {
+        const times = this.inputTimes[p]!;
+        let next = this.inputNext[p]!;
+        while (next < times.length && times[next]! < unhandled - SAME_TIME_S) next += 1;
+        this.inputNext[p] = next;
+        if (next < times.length && times[next]! < cap[p]!) cap[p] = times[next]!;
+      }
+      for (const timer of this.timers) for (const p of this.touchOf[timer.behaviour]!) if (timer.t < cap[p]!) cap[p] = timer.t;
+      for (const i of this.crossing) {
+        const t = partitions[i]!.time;
+        for (const p of this.crossTouch[i]!) if (t < cap[p]!) cap[p] = t;
+      }
+      let undone = false;
+      for (let p = 0; p < partitions.length; p += 1) {
+        if (partitions[p]!.time > cap[p]! + SAME_TIME_S && partitions[p]!.canUndo()) {
+          partitions[p]!.restore();
+          this.queue.update(p);
+          undone = true;
+        }
+      }
+      if (!undone) return;
+    }
+  }
+
+  /** A partition stopped on a guard crossing: what acts on it touches its own partition and the acting behaviours' ones. */
+  private crossingFound(index: number): void {
+    const p = this.partitions[index]!;
+    const touched = new Set<number>([index]);
+    for (const g of p.crossed) {
+      if (g < p.pistonGuardCount) continue;
+      for (const q of this.touchOf[p.guardOwners[(g - p.pistonGuardCount) * 2]!]!) touched.add(q);
+    }
+    this.crossTouch[index] = [...touched];
+    this.crossing.push(index);
+    this.capsStale = true;
+  }
+
+  /**
+   * Handles everything due at instant t. Every partition has reached t, and those that
+   * anything due touches stand exactly on it.
+   */
+  private handle(t: number, sample: Float64Array): void {
+    this.time = t;
+    this.flushRows(t, false, sample);
+    this.beginInstant(t);
+    this.fireCrossings();
+    while (this.inputCursor < this.inputs.length && this.inputs[this.inputCursor]!.t <= t + SAME_TIME_S) this.applyInput(this.inputs[this.inputCursor++]!);
+    while (this.timers.length && this.timers[0]!.t <= t + SAME_TIME_S) {
+      const timer = this.timers.shift()!;
+      this.withBehaviour(timer.behaviour, (b) => b.onTimer?.(timer.tag, this.api));
+    }
+    this.settle();
+    if (t >= this.untilS - SAME_TIME_S) {
+      for (const p of this.partitions) p.ensureFresh();
+      if (this.firstPending * this.intervalS >= this.untilS - SAME_TIME_S || Math.abs(this.firstPending * this.intervalS - t) <= SAME_TIME_S) this.record(sample);
+    } else {
+      const k = this.firstPending;
+      if (Math.abs(k * this.intervalS - t) <= SAME_TIME_S) {
+        // The row at this instant shows the state after what happened at it.
+        for (const i of this.syncedList) this.partitions[i]!.writeRow(k);
+        this.flushRows(t, true, sample);
+      }
+    }
+    this.endInstant();
+    this.capsStale = true;
+  }
+
+  private beginInstant(t: number): void {
+    this.syncedList = [];
+    for (let i = 0; i < this.partitions.length; i += 1) {
+      if (Math.abs(this.partitions[i]!.time - t) <= SAME_TIME_S) {
+        this.synced[i] = 1;
+        this.syncedList.push(i);
+        this.partitions[i]!.ensureFresh();
+      }
+    }
+    this.handling = true;
+  }
+
+  private endInstant(): void {
+    for (const i of this.syncedList) this.synced[i] = 0;
+    this.syncedList = [];
+    this.handling = false;
+  }
+
+  /** Acts on the crossings of the partitions standing on the instant being handled. */
   private fireCrossings(): void {
-    for (const p of this.partitions) {
+    for (const i of this.syncedList) {
+      const p = this.partitions[i]!;
       if (!p.crossed.length) continue;
       const crossed = p.crossed;
       const values = p.guardValues;
@@ -331,36 +458,42 @@ class Run implements GuardSource, OutputRows {
    * nothing touched keeps its guards.
    */
   private settle(): void {
-    const w = this.w;
-    this.m.pistons.forEach((p, k) => {
-      const partition = this.partitions[this.partitionOfPiston[k]!]!;
-      if (partition.quiescent && !partition.dirty) return;
-      partition.ensureFresh();
-      const drive = w.driveForce(k);
-      const mode = w.mode[k]!;
-      const leave =
-        (mode === 'end-min' && drive > p.breakawayN) || (mode === 'end-max' && -drive > p.breakawayN) || (mode === 'stuck' && Math.abs(drive) > p.breakawayN);
-      if (leave) {
-        w.mode[k] = 'free';
-        w.direction[k] = Math.sign(drive);
-        partition.setPiston(k, w.position[k]!, 0);
-        this.emit(p.owner, 'started', drive > 0 ? 'extending' : 'retracting');
-      } else if (mode === 'free') {
-        const v = w.velocity[k]!;
-        w.direction[k] = v !== 0 ? Math.sign(v) : Math.sign(drive) || w.direction[k]!;
-      }
-    });
-    for (const p of this.partitions) {
+    for (const i of this.syncedList) {
+      const partition = this.partitions[i]!;
+      if (partition.quiescent && !partition.dirty) continue;
+      for (const k of partition.spec.pistons) this.settlePiston(partition, k);
+    }
+    for (const i of this.syncedList) {
+      const p = this.partitions[i]!;
       if (!p.dirty && p.quiescent) continue;
       const before = p.guardValues;
       p.computeGuards();
       // A boundary pressure jumped at this instant: guards reading it cross now, not during a step.
-      if (p.boundaryChanged) p.crossed = p.guardValues.flatMap((g, i) => ((before[i]! < 0 && g >= 0) || (before[i]! > 0 && g <= 0) ? [i] : []));
+      if (p.boundaryChanged) p.crossed = p.guardValues.flatMap((g, j) => ((before[j]! < 0 && g >= 0) || (before[j]! > 0 && g <= 0) ? [j] : []));
       p.boundaryChanged = false;
     }
-    if (this.partitions.some((p) => p.crossed.length)) {
+    if (this.syncedList.some((i) => this.partitions[i]!.crossed.length)) {
       this.fireCrossings();
       this.settle();
+    }
+  }
+
+  private settlePiston(partition: Partition, k: number): void {
+    const w = this.w;
+    const p = this.m.pistons[k]!;
+    partition.ensureFresh();
+    const drive = w.driveForce(k);
+    const mode = w.mode[k]!;
+    const leave =
+      (mode === 'end-min' && drive > p.breakawayN) || (mode === 'end-max' && -drive > p.breakawayN) || (mode === 'stuck' && Math.abs(drive) > p.breakawayN);
+    if (leave) {
+      w.mode[k] = 'free';
+      w.direction[k] = Math.sign(drive);
+      partition.setPiston(k, w.position[k]!, 0);
+      this.emit(p.owner, 'started', drive > 0 ? 'extending' : 'retracting');
+    } else if (mode === 'free') {
+      const v = w.velocity[k]!;
+      w.direction[k] = v !== 0 ? Math.sign(v) : Math.sign(drive) || w.direction[k]!;
     }
   }
 
@@ -377,13 +510,26 @@ class Run implements GuardSource, OutputRows {
   private withBehaviour(index: number, fn: (behaviour: SolverModel['behaviours'][number]['behaviour']) => void): void {
     const previous = this.currentBehaviour;
     this.currentBehaviour = index;
-    for (const p of this.partitions) p.ensureFresh();
-    fn(this.m.behaviours[index]!.behaviour);
-    // A behaviour may change what its passages do without touching an opening (a regulator's set point).
-    for (const p of this.partitionsOwnedBy[index]!) this.partitions[p]!.wake();
+    for (const i of this.syncedList) this.partitions[i]!.ensureFresh();
+    const behaviour = this.m.behaviours[index]!.behaviour;
+    fn(behaviour);
+    if (behaviour.signals) this.signalValues[index]!.set(Object.values(behaviour.signals()));
+    // A behaviour may change what its passages do without touching an opening (a regulator's set point);
+    // changed openings wake their partitions themselves.
+    for (const p of this.modulatedBy[index]!) this.partitions[p]!.wake();
     const own = this.partitionOfBehaviour[index]!;
     if (own >= 0) this.partitions[own]!.dirty = true;
     this.currentBehaviour = previous;
+  }
+
+  /**
+   * A behaviour acting at an instant may only read or change partitions standing on it
+   * (its touch set). Anything else is a fault in the touch sets, not in the user's circuit.
+   */
+  private mustStandHere(partition: number): void {
+    if (partition >= 0 && !this.synced[partition]) {
+      throw new Error(`internal: ${this.m.behaviours[this.currentBehaviour]?.tag ?? 'a behaviour'} acted on a partition that is not at t = ${this.time} s`);
+    }
   }
 
   private emit(componentId: string, kind: string, detail?: string): void {
@@ -401,17 +547,28 @@ class Run implements GuardSource, OutputRows {
       get time() {
         return timeOf();
       },
-      pressure: (ref: NodeRef) => w.pressure[ref.node]!,
+      pressure: (ref: NodeRef) => {
+        if (this.handling) this.mustStandHere(this.partitionOfFreeNode[ref.node]!);
+        return w.pressure[ref.node]!;
+      },
       ambientPa: () => this.m.ambientPa,
-      position: (ref: PistonRef) => w.position[ref.piston]!,
-      velocity: (ref: PistonRef) => w.velocity[ref.piston]!,
+      position: (ref: PistonRef) => {
+        if (this.handling) this.mustStandHere(this.partitionOfPiston[ref.piston]!);
+        return w.position[ref.piston]!;
+      },
+      velocity: (ref: PistonRef) => {
+        if (this.handling) this.mustStandHere(this.partitionOfPiston[ref.piston]!);
+        return w.velocity[ref.piston]!;
+      },
       setOpening: (ref: RestrictionRef, opening: number) => {
+        if (this.handling) this.mustStandHere(this.partitionOfRestriction[ref.restriction]!);
         if (w.opening[ref.restriction] === opening) return;
         w.opening[ref.restriction] = opening;
         const p = this.partitionOfRestriction[ref.restriction]!;
         if (p >= 0) this.partitions[p]!.wake();
       },
       setFixedPressure: (ref: NodeRef, pressurePa: number) => {
+        if (this.handling) for (const p of this.partitionsOfFixedNode.get(ref.node) ?? []) this.mustStandHere(p);
         w.fixedPressure[ref.node] = pressurePa;
         w.pressure[ref.node] = pressurePa;
         for (const p of this.partitionsOfFixedNode.get(ref.node) ?? []) {
@@ -454,6 +611,23 @@ class Run implements GuardSource, OutputRows {
     this.sink.sample(this.time, out);
   }
 
+  /** The columns no partition fills, as they are now. */
+  private sampleConstants(out: Float64Array): void {
+    const w = this.w;
+    const ports = this.boundaryPortColumns;
+    for (let j = 0; j < ports.length; j += 2) out[ports[j]!] = w.pressure[ports[j + 1]!]!;
+    const flows = this.boundaryFlowColumns;
+    for (let j = 0; j < flows.length; j += 2) out[flows[j]!] = this.boundaryFlow(flows[j + 1]!);
+    this.signalValues.forEach((values, b) => out.set(values, this.signalColumn[b]!));
+  }
+
+  /** Flow through a passage between two boundaries: nothing integrates it, but it is still worth showing. */
+  private boundaryFlow(r: number): number {
+    const spec = this.m.restrictions[r]!;
+    signedIsoFlowInto(this.scratch, this.w.gain[r]!, spec.criticalRatio, 0.5, this.w.pressure[spec.from]!, this.w.pressure[spec.to]!, ISO_LINEAR_REGION_EPSILON);
+    return this.w.opening[r]! * this.scratch.flow;
+  }
+
   /** Every trace value as the world holds it now. */
   private sampleInto(out: Float64Array): void {
     const w = this.w;
@@ -465,15 +639,12 @@ class Run implements GuardSource, OutputRows {
     });
     if (this.recordFlows) {
       for (let r = 0; r < this.m.restrictions.length; r += 1) {
-        if (this.partitionOfRestriction[r]! >= 0) out[i++] = w.flow[r]!;
-        else {
-          // Between two boundaries: nothing integrates it, but its flow is still worth showing.
-          const spec = this.m.restrictions[r]!;
-          signedIsoFlowInto(this.scratch, w.gain[r]!, spec.criticalRatio, 0.5, w.pressure[spec.from]!, w.pressure[spec.to]!, ISO_LINEAR_REGION_EPSILON);
-          out[i++] = w.opening[r]! * this.scratch.flow;
-        }
+        out[i++] = this.partitionOfRestriction[r]! >= 0 ? w.flow[r]! : this.boundaryFlow(r);
       }
     }
-    for (const b of this.m.behaviours) for (const value of Object.values(b.behaviour.signals?.() ?? {})) out[i++] = value;
+    this.signalValues.forEach((values) => {
+      out.set(values, i);
+      i += values.length;
+    });
   }
 }

@@ -273,9 +273,11 @@ describe('double-acting cylinder extension vs an independent odex integration of
       const tExtended = eventTime(trace, 'cyl', 'end-position', 'extended', tSwitch);
 
       // Precondition of the reference's initial state: at the sample before switching the B side is at
-      // supply pressure and the A side at ambient (within 1 Pa).
+      // supply pressure and the A side at ambient. A partition at rest stops integrating once its pressures
+      // drift by less than 10 Pa/s, so the last approach to the supply may stop up to 100 Pa short (0.02 %
+      // of p_s, a force of about 0.07 N on this rod side against some 400 N of thrust).
       const k = trace.time.findIndex((t) => t >= tSwitch - 1e-9) - 1;
-      expect(Math.abs(values(trace, 'cyl:p:B')[k]! - P_S)).toBeLessThan(1);
+      expect(Math.abs(values(trace, 'cyl:p:B')[k]! - P_S)).toBeLessThan(100);
       expect(Math.abs(values(trace, 'cyl:p:A')[k]! - P_AMB)).toBeLessThan(1);
 
       const ref = integrateReference(c);
