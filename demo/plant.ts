@@ -35,4 +35,10 @@ export const DEMO_CIRCUITS: ReadonlyArray<{ file: string; title: string; descrip
     description: 'Spring-return gate cylinder; a quick exhaust valve shortens the return stroke.',
     author: 'owner',
   },
+  {
+    file: 'lid-press-relay-control.json',
+    title: 'Lid press — relay control, 24 V DC',
+    description: 'The press on a single-solenoid 5/2 valve: start and stop buttons latch K1, reed sensor 1B2 at the bottom starts dwell timer KT1, which ends the cycle; emergency stop S0 feeds every rung.',
+    author: 'engineer',
+  },
 ];

@@ -6,7 +6,7 @@
 import { compile } from '@/engine/solver/compile';
 import { simulate } from '@/engine/solver/simulate';
 import { MemoryTraceSink } from '@/engine/trace/trace';
-import { generatedCircuit } from './bench/generated-circuits';
+import { generatedCircuit, generatedElectroCircuit } from './bench/generated-circuits';
 
 const MACHINE_SECONDS = 10;
 const SIZES = [10, 50, 200];
@@ -20,8 +20,10 @@ class MeasuringSink extends MemoryTraceSink {
   }
 }
 
-function run(size: number): { components: number; wallS: number; steps: number; peakMiB: number; events: number } {
-  const { document, inputs } = generatedCircuit(size);
+type Generator = typeof generatedCircuit;
+
+function run(generate: Generator, size: number): { components: number; wallS: number; steps: number; peakMiB: number; events: number } {
+  const { document, inputs } = generate(size);
   const { model, diagnostics } = compile(document);
   if (!model) throw new Error(diagnostics.map((d) => d.message).join('\n'));
   const sink = new MeasuringSink();
@@ -32,21 +34,26 @@ function run(size: number): { components: number; wallS: number; steps: number; 
   return { components: document.components.length, wallS, steps: trace.time.length, peakMiB: sink.peakHeapBytes / 2 ** 20, events: trace.events.length };
 }
 
-const rows = SIZES.map((size) => {
-  const runs = Array.from({ length: RUNS }, () => run(size));
-  const best = runs.reduce((a, b) => (b.wallS < a.wallS ? b : a));
-  return { ...best, coldWallS: runs[0]!.wallS, peakMiB: Math.max(...runs.map((r) => r.peakMiB)) };
-});
-console.log(`Engine benchmark: ${MACHINE_SECONDS} s of machine time, output every 10 ms, one core (Node ${process.version}), best of ${RUNS} runs`);
-console.log('components  wall, best (s)  real-time factor  first run (s)  first-run factor  peak heap (MiB)  events');
-for (const r of rows) {
-  console.log(
-    `${String(r.components).padStart(10)}  ${r.wallS.toFixed(3).padStart(14)}  ${(MACHINE_SECONDS / r.wallS).toFixed(1).padStart(15)}×  ${r.coldWallS.toFixed(3).padStart(13)}  ${(MACHINE_SECONDS / r.coldWallS).toFixed(1).padStart(15)}×  ${r.peakMiB.toFixed(1).padStart(15)}  ${String(r.events).padStart(6)}`,
-  );
+function report(title: string, generate: Generator): void {
+  const rows = SIZES.map((size) => {
+    const runs = Array.from({ length: RUNS }, () => run(generate, size));
+    const best = runs.reduce((a, b) => (b.wallS < a.wallS ? b : a));
+    return { ...best, coldWallS: runs[0]!.wallS, peakMiB: Math.max(...runs.map((r) => r.peakMiB)) };
+  });
+  console.log(`\n${title}: ${MACHINE_SECONDS} s of machine time, output every 10 ms, one core (Node ${process.version}), best of ${RUNS} runs`);
+  console.log('components  wall, best (s)  real-time factor  first run (s)  first-run factor  peak heap (MiB)  events');
+  for (const r of rows) {
+    console.log(
+      `${String(r.components).padStart(10)}  ${r.wallS.toFixed(3).padStart(14)}  ${(MACHINE_SECONDS / r.wallS).toFixed(1).padStart(15)}×  ${r.coldWallS.toFixed(3).padStart(13)}  ${(MACHINE_SECONDS / r.coldWallS).toFixed(1).padStart(15)}×  ${r.peakMiB.toFixed(1).padStart(15)}  ${String(r.events).padStart(6)}`,
+    );
+  }
+  for (let i = 1; i < rows.length; i += 1) {
+    const a = rows[i - 1]!;
+    const b = rows[i]!;
+    const exponent = Math.log(b.wallS / a.wallS) / Math.log(b.components / a.components);
+    console.log(`cost growth ${a.components} → ${b.components} components: wall time × ${(b.wallS / a.wallS).toFixed(2)} for size × ${(b.components / a.components).toFixed(2)} (exponent ${exponent.toFixed(2)}; 1 = linear)`);
+  }
 }
-for (let i = 1; i < rows.length; i += 1) {
-  const a = rows[i - 1]!;
-  const b = rows[i]!;
-  const exponent = Math.log(b.wallS / a.wallS) / Math.log(b.components / a.components);
-  console.log(`cost growth ${a.components} → ${b.components} components: wall time × ${(b.wallS / a.wallS).toFixed(2)} for size × ${(b.components / a.components).toFixed(2)} (exponent ${exponent.toFixed(2)}; 1 = linear)`);
-}
+
+report('Pneumatic cells (push-button valve pilots a 5/2 valve)', generatedCircuit);
+report('Electro-pneumatic cells (push-button, relay, solenoid 5/2 valve)', generatedElectroCircuit);

@@ -1,3 +1,21 @@
+import { counter } from './counter';
+import { dcSupply } from './dc-supply';
+import { diode } from './diode';
+import { emergencyStop } from './emergency-stop';
+import { indicatorLamp } from './indicator-lamp';
+import { limitSwitch } from './limit-switch';
+import { pressureSwitch } from './pressure-switch';
+import { proximitySensorInductive } from './proximity-sensor-inductive';
+import { proximitySensorReed } from './proximity-sensor-reed';
+import { pushbuttonNc } from './pushbutton-nc';
+import { pushbuttonNo } from './pushbutton-no';
+import { relayCoil } from './relay-coil';
+import { relayContactNc } from './relay-contact-nc';
+import { relayContactNo } from './relay-contact-no';
+import { selectorSwitch } from './selector-switch';
+import { solenoidCoil } from './solenoid-coil';
+import { timerRelayOffDelay } from './timer-relay-off-delay';
+import { timerRelayOnDelay } from './timer-relay-on-delay';
 import { airSupply } from './air-supply';
 import { checkValve } from './check-valve';
 import { cylinderDoubleActing } from './cylinder-double-acting';
@@ -58,6 +76,24 @@ export const COMPONENT_TYPES: readonly ComponentType[] = [
   cylinderSingleActing,
   cylinderDoubleActing,
   semiRotaryActuator,
+  dcSupply,
+  pushbuttonNo,
+  pushbuttonNc,
+  selectorSwitch,
+  emergencyStop,
+  limitSwitch,
+  proximitySensorReed,
+  proximitySensorInductive,
+  pressureSwitch,
+  relayCoil,
+  timerRelayOnDelay,
+  timerRelayOffDelay,
+  counter,
+  relayContactNo,
+  relayContactNc,
+  solenoidCoil,
+  indicatorLamp,
+  diode,
 ];
 
 const byId = new Map(COMPONENT_TYPES.map((t) => [t.id, t]));

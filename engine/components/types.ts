@@ -5,7 +5,7 @@
  * guards, timers). Units are SI: pressures in Pa, lengths in m, times in s.
  */
 
-export const CATEGORIES = ['supply', 'input', 'logic', 'final-valve', 'actuator', 'measurement'] as const;
+export const CATEGORIES = ['supply', 'input', 'logic', 'final-valve', 'actuator', 'measurement', 'electrical'] as const;
 export type Category = (typeof CATEGORIES)[number];
 
 /** Physical meaning of a number parameter; the UI converts and labels by it. */
@@ -22,14 +22,19 @@ export type Quantity =
   | 'ratio' // dimensionless (critical ratio b, polytropic exponent)
   | 'fraction' // 0..1 (throttle opening)
   | 'volume-flow-anr' // m³/s at ISO 8778 reference atmosphere
-  | 'angle'; // rad
+  | 'angle' // rad
+  | 'voltage' // V
+  | 'count'; // whole number of events
 
 export type ParameterSpec =
   | { kind: 'number'; quantity: Quantity; label: string; default: number; min: number; max: number; description?: string }
   | { kind: 'choice'; label: string; options: readonly string[]; default: string; description?: string }
-  | { kind: 'flag'; label: string; default: boolean; description?: string };
+  | { kind: 'flag'; label: string; default: boolean; description?: string }
+  /** The tag of another component in the same circuit (the relay a contact belongs to, the valve a coil drives). */
+  | { kind: 'tag'; label: string; default: string; refers: 'coil' | 'valve'; description?: string };
 
-export type PortRole = 'supply' | 'working' | 'exhaust' | 'pilot' | 'signal';
+/** Air ports are joined by tubes; electrical terminals (role `terminal`) by wires. */
+export type PortRole = 'supply' | 'working' | 'exhaust' | 'pilot' | 'signal' | 'terminal';
 
 export interface PortSpec {
   /** Port number as ISO 11727 / ISO 5599-3 give it ("1", "2", "14"), or a letter where the trade uses one. */
@@ -108,6 +113,11 @@ export interface RuntimeApi {
   schedule(delayS: number, tag: string): void;
   cancel(tag: string): void;
   event(kind: string, detail?: string): void;
+  /**
+   * Gives another component (by id or tag) an input after delay seconds (0: at this instant,
+   * after what is already due): a coil driving its valve, a circuit waking a relay.
+   */
+  send(target: string, command: InputCommand, delayS?: number): void;
 }
 
 export type InputAction = 'press' | 'release' | 'toggle' | 'set';
@@ -127,8 +137,13 @@ export interface Behaviour {
   onInput?(command: InputCommand, api: RuntimeApi): void;
   /** Runs once at t = 0 after every component is built. */
   start?(api: RuntimeApi): void;
-  /** Discrete signals for the trace (valve position index, actuated flags); they change only in the behaviour's own callbacks. */
+  /**
+   * Discrete signals for the trace (valve position index, actuated flags). They change only in
+   * the behaviour's own callbacks, unless `sharesState` is set.
+   */
   signals?(): Record<string, number>;
+  /** Its signals follow state it shares with others (a relay contact follows its coil): read them whenever any such behaviour acts. */
+  sharesState?: boolean;
 }
 
 export interface ActuationLink {
@@ -155,6 +170,10 @@ export interface BuildContext {
   addVolume(node: NodeRef, volumeM3: number): void;
   restriction(spec: RestrictionSpec): RestrictionRef;
   piston(spec: PistonSpec): PistonRef;
+  /** The control-circuit net of an electrical terminal (terminals joined by wires share one). */
+  terminal(id: string): number;
+  /** The circuit's one electrical control network, shared by every electrical component. */
+  control(): ControlNetwork;
   /** Position links that actuate this component (roller valves, sensors). */
   actuationLinks(): ActuationLink[];
   ambientPa(): number;
@@ -174,6 +193,24 @@ export interface ComponentType {
   /** Manual inputs a user can give on the drawing. */
   readonly inputs?: readonly InputAction[];
   build(ctx: BuildContext): Behaviour;
+}
+
+/** What an electrical component registers with the control network (implemented in ../solver/control-network.ts). */
+export interface ControlNetwork {
+  /** The + (L+) and 0 V (M) rails of a DC supply. */
+  addSupply(plusNet: number, zeroNet: number): void;
+  /** A switching element between two nets; returns its index. `coil` names the coil it follows, if any. */
+  addContact(a: number, b: number, closed: boolean, owner: string, coil?: string): number;
+  /** A one-way element (a diode), conducting from anode to cathode only. */
+  addDiode(anode: number, cathode: number, owner: string): void;
+  /** A load between two nets (coil, lamp); `owner` gets `set` inputs (value 1 or 0) as it is energised or not. */
+  addLoad(a: number, b: number, owner: string, name?: string): number;
+  setContact(contact: number, closed: boolean, api: RuntimeApi): void;
+  /** Switches every contact that follows `coil`: normally-open ones close when `operated`. */
+  operateContacts(coil: string, operated: boolean, api: RuntimeApi): void;
+  contactClosed(contact: number): boolean;
+  /** Recomputes which loads are energised and tells the owners of those that changed. */
+  settle(api: RuntimeApi): void;
 }
 
 /** Reads a parameter with the type's default. */

@@ -2,6 +2,8 @@ import { tubeVolume } from '../calc/tube';
 import { componentTypeById } from '../components/registry';
 import { parameterDefaults, type ActuationLink, type BuildContext, type ComponentType, type NodeRef, type PistonSpec, type RestrictionSpec } from '../components/types';
 import type { CircuitDocument } from '../document/schema';
+import { ControlCircuit } from './control-network';
+import { electricalDiagnostics } from './electrical-diagnostics';
 import type { Diagnostic, NodeModel, PistonModel, RestrictionModel, SolverModel } from './model';
 
 /**
@@ -65,7 +67,8 @@ export function compile(document: CircuitDocument): CompileResult {
       const bad =
         (spec.kind === 'number' && (typeof value !== 'number' || value < spec.min || value > spec.max)) ||
         (spec.kind === 'choice' && (typeof value !== 'string' || !spec.options.includes(value))) ||
-        (spec.kind === 'flag' && typeof value !== 'boolean');
+        (spec.kind === 'flag' && typeof value !== 'boolean') ||
+        (spec.kind === 'tag' && typeof value !== 'string');
       if (bad) {
         const range = spec.kind === 'number' ? ` (${spec.min} to ${spec.max})` : spec.kind === 'choice' ? ` (one of ${spec.options.join(', ')})` : '';
         diagnostics.push({ code: 'bad-parameter', severity: 'error', message: `${c.tag}: ${spec.label} has an invalid value${range}`, componentId: c.id });
@@ -77,12 +80,16 @@ export function compile(document: CircuitDocument): CompileResult {
   const uf = new UnionFind();
   const tubeVolumeAt = new Map<string, number>();
   const connectedPorts = new Set<string>();
+  const roleOf = (component: string, port: string) => types.get(component)?.ports.find((p) => p.id === port)?.role;
   for (const tube of document.tubes) {
     let ok = true;
     for (const end of [tube.from, tube.to]) {
       const type = types.get(end.component);
       if (!byId.has(end.component) || (type && !type.ports.some((p) => p.id === end.port))) {
         diagnostics.push({ code: 'tube-unknown-port', severity: 'error', message: `Tube ${tube.id} ends at ${end.component}:${end.port}, which does not exist`, tubeId: tube.id });
+        ok = false;
+      } else if (roleOf(end.component, end.port) === 'terminal') {
+        diagnostics.push({ code: 'tube-on-terminal', severity: 'error', message: `Tube ${tube.id} ends at the electrical terminal ${byId.get(end.component)!.tag}:${end.port}`, tubeId: tube.id });
         ok = false;
       }
     }
@@ -94,6 +101,35 @@ export function compile(document: CircuitDocument): CompileResult {
     uf.union(a, b);
     tubeVolumeAt.set(a, (tubeVolumeAt.get(a) ?? 0) + tubeVolume(tube.lengthM, tube.innerDiameterM));
   }
+
+  // Wires join electrical terminals into nets, as tubes join ports into nodes.
+  const wiring = new UnionFind();
+  for (const wire of document.wires) {
+    let ok = true;
+    for (const end of [wire.from, wire.to]) {
+      const role = roleOf(end.component, end.port);
+      if (!byId.has(end.component) || (types.has(end.component) && !role)) {
+        diagnostics.push({ code: 'wire-unknown-terminal', severity: 'error', message: `Wire ${wire.id} ends at ${end.component}:${end.port}, which does not exist`, wireId: wire.id });
+        ok = false;
+      } else if (role && role !== 'terminal') {
+        diagnostics.push({ code: 'wire-on-air-port', severity: 'error', message: `Wire ${wire.id} ends at the air port ${byId.get(end.component)!.tag}:${end.port}`, wireId: wire.id });
+        ok = false;
+      }
+    }
+    if (ok) wiring.union(key(wire.from.component, wire.from.port), key(wire.to.component, wire.to.port));
+  }
+  const netOfRoot = new Map<string, number>();
+  const netOf = (component: string, terminal: string): number => {
+    const root = wiring.find(key(component, terminal));
+    let net = netOfRoot.get(root);
+    if (net === undefined) {
+      net = netOfRoot.size;
+      netOfRoot.set(root, net);
+    }
+    return net;
+  };
+  const control = new ControlCircuit((id) => byId.get(id)?.tag ?? id);
+  diagnostics.push(...electricalDiagnostics(document, types, netOf));
 
   const links = new Map<string, Array<{ from: string; positionM: number }>>();
   for (const link of document.links) {
@@ -154,6 +190,8 @@ export function compile(document: CircuitDocument): CompileResult {
       choice: (n) => String(params[n]),
       flag: (n) => Boolean(params[n]),
       port: portNode,
+      terminal: (id) => netOf(component.id, id),
+      control: () => control,
       connected: (id) => connectedPorts.has(key(component.id, id)),
       internalNode: (name, volumeM3) => ({ node: addNode(nodes, { name: `${component.tag}:${name}`, volumeM3, fixed: false, fixedPressurePa: 0, chambers: [] }) }),
       atmosphere: () => ({ node: atmosphere }),
@@ -205,10 +243,11 @@ export function compile(document: CircuitDocument): CompileResult {
         }),
       ambientPa: () => ambientPa,
     };
-    for (const p of type.ports) portNode(p.id);
+    for (const p of type.ports) if (p.role !== 'terminal') portNode(p.id);
     behaviours.push({ componentId: component.id, tag: component.tag, behaviour: type.build(ctx) });
   }
 
+  control.useNets(netOfRoot.size);
   for (const node of nodes) {
     if (!node.fixed && node.volumeM3 <= 0 && node.chambers.length === 0) node.volumeM3 = PORT_VOLUME_M3;
   }
@@ -217,7 +256,7 @@ export function compile(document: CircuitDocument): CompileResult {
     componentIds.set(b.componentId, i);
     componentIds.set(b.tag, i);
   });
-  return { model: { ambientPa, temperatureK, nodes, restrictions, pistons, behaviours, portNodes, componentIds }, diagnostics };
+  return { model: { ambientPa, temperatureK, nodes, restrictions, pistons, behaviours, portNodes, componentIds, control }, diagnostics };
 }
 
 function addNode(nodes: NodeModel[], node: NodeModel): number {

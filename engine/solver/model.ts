@@ -47,6 +47,7 @@ export interface Diagnostic {
   message: string;
   componentId?: string;
   tubeId?: string;
+  wireId?: string;
 }
 
 /** Everything the solver needs, built once from a document. */
@@ -61,4 +62,6 @@ export interface SolverModel {
   portNodes: Array<{ signal: string; node: number }>;
   /** Component id and tag lookup, for inputs given by either. */
   componentIds: Map<string, number>;
+  /** The electrical control network's change counter: contacts moved when it moves. */
+  control: { readonly version: number };
 }

@@ -65,6 +65,7 @@ export function buildPartitions(model: SolverModel, api: RuntimeApi): PartitionS
       schedule: () => undefined,
       cancel: () => undefined,
       event: () => undefined,
+      send: () => undefined,
     };
     entry.behaviour.guards?.(probe);
     for (const element of read) sets.union(element, read[0]!);

@@ -46,6 +46,8 @@ interface Timer {
   seq: number;
   behaviour: number;
   tag: string;
+  /** An input another behaviour sent (instead of a call of onTimer). */
+  command?: InputCommand;
 }
 
 /**
@@ -123,6 +125,8 @@ class Run implements GuardSource, OutputRows {
   /** Each behaviour's signal values as of its last action, and where they start in a trace row. */
   private readonly signalValues: Float64Array[];
   private readonly signalColumn: Int32Array;
+  /** Behaviours whose signals follow shared state: all are read again when one of them acts. */
+  private readonly sharingState: number[];
 
   constructor(model: SolverModel, options: SimulationOptions, sink?: TraceSink) {
     this.m = model;
@@ -179,6 +183,7 @@ class Run implements GuardSource, OutputRows {
     this.synced = new Uint8Array(this.partitions.length);
     this.signalValues = model.behaviours.map((b) => Float64Array.from(Object.values(b.behaviour.signals?.() ?? {})));
     this.signalColumn = new Int32Array(model.behaviours.length);
+    this.sharingState = model.behaviours.flatMap((b, i) => (b.behaviour.sharesState ? [i] : []));
     this.initialBudget = this.airBudget();
   }
 
@@ -260,6 +265,9 @@ class Run implements GuardSource, OutputRows {
     // Conditions already true at the start count as having just become true.
     for (const p of this.partitions) p.crossed = p.guardValues.flatMap((g, i) => (i >= p.pistonGuardCount && g > 0 ? [i] : []));
     this.fireCrossings();
+    this.settle();
+    // What the start set going at once (coils energised from the first settle of the control circuit).
+    this.fireDueTimers(0);
     this.settle();
     this.endInstant();
     this.record(sample);
@@ -368,10 +376,7 @@ class Run implements GuardSource, OutputRows {
     this.beginInstant(t);
     this.fireCrossings();
     while (this.inputCursor < this.inputs.length && this.inputs[this.inputCursor]!.t <= t + SAME_TIME_S) this.applyInput(this.inputs[this.inputCursor++]!);
-    while (this.timers.length && this.timers[0]!.t <= t + SAME_TIME_S) {
-      const timer = this.timers.shift()!;
-      this.withBehaviour(timer.behaviour, (b) => b.onTimer?.(timer.tag, this.api));
-    }
+    this.fireDueTimers(t);
     this.settle();
     if (t >= this.untilS - SAME_TIME_S) {
       for (const p of this.partitions) p.ensureFresh();
@@ -386,6 +391,30 @@ class Run implements GuardSource, OutputRows {
     }
     this.endInstant();
     this.capsStale = true;
+  }
+
+  private fireDueTimers(t: number): void {
+    while (this.timers.length && this.timers[0]!.t <= t + SAME_TIME_S) {
+      // A timer set at this very instant (a coil driving its valve) may touch partitions already past it:
+      // they are brought back to it first, and the instant is handled again.
+      if (!this.touchStands(this.timers[0]!.behaviour)) return;
+      const timer = this.timers.shift()!;
+      if (timer.command) {
+        const command = timer.command;
+        this.withBehaviour(timer.behaviour, (b) => b.onInput?.(command, this.api));
+      } else this.withBehaviour(timer.behaviour, (b) => b.onTimer?.(timer.tag, this.api));
+    }
+  }
+
+  /** Every partition the behaviour touches stands on the instant (or is past it for good: a step that can no longer be undone). */
+  private touchStands(behaviour: number): boolean {
+    for (const p of this.touchOf[behaviour]!) {
+      if (this.synced[p]) continue;
+      const partition = this.partitions[p]!;
+      if (partition.time > this.time + SAME_TIME_S && !partition.canUndo()) continue;
+      return false;
+    }
+    return true;
   }
 
   private beginInstant(t: number): void {
@@ -512,14 +541,21 @@ class Run implements GuardSource, OutputRows {
     this.currentBehaviour = index;
     for (const i of this.syncedList) this.partitions[i]!.ensureFresh();
     const behaviour = this.m.behaviours[index]!.behaviour;
+    const contacts = this.m.control.version;
     fn(behaviour);
-    if (behaviour.signals) this.signalValues[index]!.set(Object.values(behaviour.signals()));
+    this.readSignals(index);
+    if (this.m.control.version !== contacts) for (const b of this.sharingState) this.readSignals(b);
     // A behaviour may change what its passages do without touching an opening (a regulator's set point);
     // changed openings wake their partitions themselves.
     for (const p of this.modulatedBy[index]!) this.partitions[p]!.wake();
     const own = this.partitionOfBehaviour[index]!;
     if (own >= 0) this.partitions[own]!.dirty = true;
     this.currentBehaviour = previous;
+  }
+
+  private readSignals(index: number): void {
+    const behaviour = this.m.behaviours[index]!.behaviour;
+    if (behaviour.signals) this.signalValues[index]!.set(Object.values(behaviour.signals()));
   }
 
   /**
@@ -538,6 +574,14 @@ class Run implements GuardSource, OutputRows {
 
   private airBudget(): number {
     return this.partitions.reduce((sum, p) => sum + p.airBudget(), 0);
+  }
+
+  /** Timers in time order, and in the order they were set at equal times. */
+  private addTimer(timer: Timer): void {
+    const at = this.timers.findIndex((x) => x.t > timer.t);
+    if (at < 0) this.timers.push(timer);
+    else this.timers.splice(at, 0, timer);
+    this.capsStale = true;
   }
 
   private makeApi(): RuntimeApi {
@@ -576,15 +620,18 @@ class Run implements GuardSource, OutputRows {
           this.partitions[p]!.boundaryChanged = true;
         }
       },
-      schedule: (delayS: number, tag: string) => {
-        const timer = { t: this.time + Math.max(delayS, 0), seq: this.timerSeq++, behaviour: this.currentBehaviour, tag };
-        const at = this.timers.findIndex((x) => x.t > timer.t);
-        if (at < 0) this.timers.push(timer);
-        else this.timers.splice(at, 0, timer);
+      schedule: (delayS: number, tag: string) => this.addTimer({ t: this.time + Math.max(delayS, 0), seq: this.timerSeq++, behaviour: this.currentBehaviour, tag }),
+      send: (target: string, command: InputCommand, delayS = 0) => {
+        const behaviour = this.m.componentIds.get(target);
+        if (behaviour === undefined) {
+          this.emit(this.m.behaviours[this.currentBehaviour]?.componentId ?? '', 'input-ignored', `no component ${target}`);
+          return;
+        }
+        this.addTimer({ t: this.time + Math.max(delayS, 0), seq: this.timerSeq++, behaviour, tag: '', command });
       },
       cancel: (tag: string) => {
         for (let i = this.timers.length - 1; i >= 0; i -= 1) {
-          if (this.timers[i]!.behaviour === this.currentBehaviour && this.timers[i]!.tag === tag) this.timers.splice(i, 1);
+          if (this.timers[i]!.behaviour === this.currentBehaviour && !this.timers[i]!.command && this.timers[i]!.tag === tag) this.timers.splice(i, 1);
         }
       },
       event: (kind: string, detail?: string) => this.emit(this.m.behaviours[this.currentBehaviour]?.componentId ?? '', kind, detail),

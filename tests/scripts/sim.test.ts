@@ -22,6 +22,35 @@ describe('sim CLI', () => {
     expect(Math.abs(trace.stats.massBalanceErrorKg)).toBeLessThan(1e-12);
   });
 
+  it('runs the relay-controlled press through one cycle: latch, extend, dwell on the sensor, return', () => {
+    const out = execFileSync(tsx, ['scripts/sim.ts', 'demo/circuits/lid-press-relay-control.json', '--inputs', 'demo/circuits/lid-press-relay-control.inputs.json', '--until', '3'], { encoding: 'utf8' });
+    const trace = JSON.parse(out) as Trace;
+    const steps = trace.events.filter((e) => !e.kind.startsWith('input') && e.componentId !== 'lamp').map((e) => `${e.componentId} ${e.kind}${e.detail ? ` ${e.detail}` : ''}`);
+    expect(steps).toEqual([
+      'k1 energised',
+      'k1 contacts-operated',
+      'm1 energised',
+      'main switched a',
+      'press started extending',
+      'down actuated',
+      'kt1 energised',
+      'press end-position extended',
+      'kt1 contacts-operated',
+      'k1 de-energised',
+      'k1 contacts-returned',
+      'm1 de-energised',
+      'main switched b',
+      'press started retracting',
+      'down released',
+      'kt1 de-energised',
+      'kt1 contacts-returned',
+      'press end-position retracted',
+    ]);
+    // The dwell: 0.5 s from the sensor seeing the press down to the timer ending the cycle.
+    const t = (component: string, kind: string) => trace.events.find((e) => e.componentId === component && e.kind === kind)!.t;
+    expect(t('kt1', 'contacts-operated') - t('down', 'actuated')).toBeCloseTo(0.5, 9);
+  });
+
   it('prints CSV with a time column and labelled units', () => {
     const result = sim('demo/circuits/reject-gate-quick-exhaust.json', '--inputs', 'demo/circuits/reject-gate-quick-exhaust.inputs.json', '--until', '0.5', '--interval', '0.1', '--format', 'csv');
     expect(result.status).toBe(0);

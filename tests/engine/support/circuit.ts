@@ -7,6 +7,7 @@ export class TestCircuit {
   private readonly components: Array<{ id: string; type: string; tag: string; parameters: Parameters }> = [];
   private readonly tubes: Array<{ from: string; to: string; lengthM: number; innerDiameterM: number }> = [];
   private readonly links: Array<{ from: string; to: string; positionM: number }> = [];
+  private readonly wires: Array<{ from: string; to: string }> = [];
 
   add(id: string, type: string, parameters: Parameters = {}, tag = id): this {
     this.components.push({ id, type, tag, parameters });
@@ -16,6 +17,12 @@ export class TestCircuit {
   /** A tube of 4 mm bore (common practice for 6 mm outside-diameter tubing). */
   tube(from: string, to: string, lengthM = 0.5, innerDiameterM = 0.004): this {
     this.tubes.push({ from, to, lengthM, innerDiameterM });
+    return this;
+  }
+
+  /** A wire between two electrical terminals, "id:terminal" each. */
+  wire(from: string, to: string): this {
+    this.wires.push({ from, to });
     return this;
   }
 
@@ -33,6 +40,7 @@ export class TestCircuit {
       schemaVersion: 1,
       components: this.components.map((c, i) => ({ ...c, position: { x: i * 100, y: 0 } })),
       tubes: this.tubes.map((t, i) => ({ id: `t${i}`, from: ref(t.from), to: ref(t.to), lengthM: t.lengthM, innerDiameterM: t.innerDiameterM })),
+      wires: this.wires.map((w, i) => ({ id: `w${i}`, from: ref(w.from), to: ref(w.to) })),
       links: this.links.map((l, i) => ({ id: `l${i}`, kind: 'actuation', from: l.from, to: l.to, positionM: l.positionM })),
     });
   }

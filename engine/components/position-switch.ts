@@ -1,0 +1,64 @@
+import { hysteresisParam, terminals, windowParam } from './electrical-parameters';
+import type { ComponentType } from './types';
+
+/**
+ * A switch actuated by a cylinder at a stroke position (an actuation link from the
+ * cylinder gives the position): actuated while the piston is within the window of
+ * that position, released once it is further than window + hysteresis away.
+ * A mechanical limit switch has a changeover contact (11 common, 12 NC, 14 NO);
+ * a three-wire sensor closes its output BK to its + lead BN while it detects.
+ */
+export function positionSwitch(def: { id: string; label: string; description: string; kind: 'changeover' | 'sensor'; windowM: number; hysteresisM: number }): ComponentType {
+  return {
+    id: def.id,
+    version: 1,
+    label: def.label,
+    category: 'electrical',
+    description: def.description,
+    ports: def.kind === 'changeover' ? terminals('11', '12', '14') : [...terminals('BN', 'BK'), { id: 'BU', role: 'terminal', label: 'BU (0 V)' }],
+    parameters: { window: windowParam(def.windowM), hysteresis: hysteresisParam(def.hysteresisM) },
+    states: ['released', 'actuated'],
+    build(ctx) {
+      const control = ctx.control();
+      const links = ctx.actuationLinks();
+      const window = ctx.num('window');
+      const hysteresis = ctx.num('hysteresis');
+      const contacts =
+        def.kind === 'changeover'
+          ? [control.addContact(ctx.terminal('11'), ctx.terminal('12'), true, ctx.componentId), control.addContact(ctx.terminal('11'), ctx.terminal('14'), false, ctx.componentId)]
+          : [control.addContact(ctx.terminal('BN'), ctx.terminal('BK'), false, ctx.componentId)];
+      ctx.terminal(def.kind === 'sensor' ? 'BU' : '11');
+      let actuated = false;
+      const reach = () => (actuated ? window + hysteresis : window);
+      const apply = (api: Parameters<NonNullable<ReturnType<ComponentType['build']>['onGuard']>>[2], now: boolean) => {
+        if (now === actuated) return;
+        actuated = now;
+        api.event(actuated ? 'actuated' : 'released');
+        if (def.kind === 'changeover') {
+          control.setContact(contacts[0]!, !actuated, api);
+          control.setContact(contacts[1]!, actuated, api);
+        } else control.setContact(contacts[0]!, actuated, api);
+      };
+      const inside = (api: Parameters<typeof apply>[0]) => links.some((l) => Math.abs(api.position(l.piston) - l.positionM) <= reach());
+      return {
+        guards(api) {
+          const out: number[] = [];
+          for (const l of links) {
+            const x = api.position(l.piston);
+            out.push(x - (l.positionM - reach()), l.positionM + reach() - x);
+          }
+          return out;
+        },
+        onGuard(_index, _rising, api) {
+          apply(api, inside(api));
+        },
+        start(api) {
+          apply(api, inside(api));
+        },
+        signals() {
+          return { actuated: actuated ? 1 : 0 };
+        },
+      };
+    },
+  };
+}
