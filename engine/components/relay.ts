@@ -68,7 +68,6 @@ export function relayContact(def: { id: string; label: string; description: stri
       const control = ctx.control();
       const contact = control.addContact(ctx.terminal(a!), ctx.terminal(b!), def.normallyClosed, ctx.componentId, ctx.choice('coil'));
       return {
-        sharesState: true,
         signals() {
           return { closed: control.contactClosed(contact) ? 1 : 0 };
         },

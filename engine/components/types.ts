@@ -139,11 +139,9 @@ export interface Behaviour {
   start?(api: RuntimeApi): void;
   /**
    * Discrete signals for the trace (valve position index, actuated flags). They change only in
-   * the behaviour's own callbacks, unless `sharesState` is set.
+   * the behaviour's own callbacks, or (for a contact) when the control network switches it.
    */
   signals?(): Record<string, number>;
-  /** Its signals follow state it shares with others (a relay contact follows its coil): read them whenever any such behaviour acts. */
-  sharesState?: boolean;
 }
 
 export interface ActuationLink {

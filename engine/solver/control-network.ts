@@ -53,8 +53,8 @@ export class ControlCircuit implements ControlNetwork {
   private settlesAtInstant = 0;
   private raceReportedAt = Number.NaN;
   private shorted = false;
-  /** Counts contact changes, so whoever shows contact states knows when to read them again. */
-  version = 0;
+  /** Owners of contacts that changed since the last drain, so whoever shows contact states reads just those. */
+  private changed: string[] = [];
   /** Elements at each net, built at the first settle (the wiring does not change while running). */
   private incident: number[][] | null = null;
 
@@ -97,7 +97,7 @@ export class ControlCircuit implements ControlNetwork {
   setContact(contact: number, closed: boolean, api: RuntimeApi): void {
     if (this.elements[contact]!.closed === closed) return;
     this.elements[contact]!.closed = closed;
-    this.version += 1;
+    this.changed.push(this.elements[contact]!.owner);
     this.settle(api);
   }
 
@@ -109,10 +109,17 @@ export class ControlCircuit implements ControlNetwork {
       if (e.closed !== closed) {
         e.closed = closed;
         changed = true;
-        this.version += 1;
+        this.changed.push(e.owner);
       }
     }
     if (changed) this.settle(api);
+  }
+
+  drainChanged(): string[] {
+    if (!this.changed.length) return this.changed;
+    const changed = this.changed;
+    this.changed = [];
+    return changed;
   }
 
   /** Components whose contacts follow `coil`, for diagnostics and the trace. */

@@ -62,6 +62,6 @@ export interface SolverModel {
   portNodes: Array<{ signal: string; node: number }>;
   /** Component id and tag lookup, for inputs given by either. */
   componentIds: Map<string, number>;
-  /** The electrical control network's change counter: contacts moved when it moves. */
-  control: { readonly version: number };
+  /** The electrical control network: the owners of contacts that changed since last asked. */
+  control: { drainChanged(): string[] };
 }

@@ -159,13 +159,33 @@ export class Partition {
   private readonly fStage: Float64Array;
   private readonly errVec: Float64Array;
   /** Stage vectors of the transformed method. */
-  private readonly u: Float64Array[];
+  private readonly u1: Float64Array;
+  private readonly u2: Float64Array;
+  private readonly u3: Float64Array;
+  private readonly u4: Float64Array;
+  /** Free nodes' global indices, and the absolute mass tolerance per m³ of volume (absTolPa/RT), kg/m³. */
+  private readonly freeNodeIndex: Int32Array;
+  private readonly absTolMassPerVolume: number;
   /** Absolute mass tolerance of each free node at the start of the step, kg. */
   private readonly massScaleOf: Float64Array;
   private fValid = false;
   private readonly scratch = { flow: 0, dFlowdPa: 0, dFlowdPb: 0 };
   private readonly lu: SparseLu;
-  private readonly slots: { diag: Int32Array; restriction: Int32Array[]; chamberX: Array<Array<[number, number, number, number]>>; modulator: Int32Array[]; piston: Int32Array[] };
+  /** Where each Jacobian term goes in the LU's value array, flattened per restriction (4), coupling (2), modulator (2) and piston (5). */
+  private readonly slots: {
+    diag: Int32Array;
+    restriction: Int32Array;
+    couplingStart: Int32Array;
+    couplingSlots: Int32Array;
+    couplingPiston: Int32Array;
+    couplingEnd: Uint8Array;
+    couplingDvdx: Float64Array;
+    couplingExponent: Float64Array;
+    modulator: Int32Array;
+    piston: Int32Array;
+    /** ∂V/∂x of each piston's cap-side and rod-side node. */
+    pistonDvdx: Float64Array;
+  };
 
   time = 0;
   private h = 1e-5;
@@ -265,7 +285,12 @@ export class Partition {
     this.stage = new Float64Array(n);
     this.fStage = new Float64Array(n);
     this.errVec = new Float64Array(n);
-    this.u = Array.from({ length: ROS34PW2.stages }, () => new Float64Array(n));
+    this.u1 = new Float64Array(n);
+    this.u2 = new Float64Array(n);
+    this.u3 = new Float64Array(n);
+    this.u4 = new Float64Array(n);
+    this.freeNodeIndex = Int32Array.from(spec.freeNodes);
+    this.absTolMassPerVolume = tol.absTolPa / world.rt;
     this.massScaleOf = new Float64Array(this.nMass);
     this.snapY = new Float64Array(n);
     // Every free node starts at the pressure the world gives it (ambient), as an isothermal mass.
@@ -550,8 +575,7 @@ export class Partition {
   }
 
   private massScale(i: number, magnitude: number): number {
-    const node = this.spec.freeNodes[i]!;
-    return (this.tol.absTolPa * this.w.volume[node]!) / this.w.rt + this.tol.relTol * magnitude;
+    return this.absTolMassPerVolume * this.w.volume[this.freeNodeIndex[i]!]! + this.tol.relTol * magnitude;
   }
 
   /**
@@ -566,8 +590,13 @@ export class Partition {
     this.lu.factor();
     const gh = GAMMA * h;
     const massScaleOf = this.massScaleOf;
-    for (let i = 0; i < this.nMass; i += 1) massScaleOf[i] = this.massScale(i, 0);
-    const [u1, u2, u3, u4] = this.u as [Float64Array, Float64Array, Float64Array, Float64Array];
+    const volume = this.w.volume;
+    const massPerVolume = this.absTolMassPerVolume;
+    for (let i = 0; i < this.nMass; i += 1) massScaleOf[i] = massPerVolume * volume[this.freeNodeIndex[i]!]!;
+    const u1 = this.u1;
+    const u2 = this.u2;
+    const u3 = this.u3;
+    const u4 = this.u4;
     const yStage = this.stage;
     const fStage = this.fStage;
     const f0 = this.f;
@@ -608,9 +637,12 @@ export class Partition {
       errSq += ei * ei;
       counted += 1;
     }
+    const norm = counted ? Math.sqrt(errSq / counted) : 0;
+    // A rejected step needs no right-hand side at its end.
+    if (norm > 1) return norm;
     this.writePositions(yNew);
     if (!this.evaluate(yNew, this.fCandidate)) return -1;
-    return counted ? Math.sqrt(errSq / counted) : 0;
+    return norm;
   }
 
   private writePositions(y: Float64Array): void {
@@ -639,7 +671,7 @@ export class Partition {
     const w = this.w;
     const pressure = w.pressure;
     let physical = true;
-    const free = this.spec.freeNodes;
+    const free = this.freeNodeIndex;
     const volume = w.volume;
     const rt = w.rt;
     const ambient = w.model.ambientPa;
@@ -766,97 +798,145 @@ export class Partition {
     });
     const lu = new SparseLu(this.nState, pairs);
     const diag = Int32Array.from({ length: this.nState }, (_, i) => lu.slot(i, i));
-    const restriction = this.spec.restrictions.map((_, j) => {
-      const a = this.rowFrom[j]!;
-      const b = this.rowTo[j]!;
-      return Int32Array.of(lu.slot(a, a), lu.slot(a, b), lu.slot(b, a), lu.slot(b, b));
-    });
-    const chamberX = this.spec.restrictions.map((r, j) => {
+    const restriction = Int32Array.from(
+      this.spec.restrictions.flatMap((_, j) => {
+        const a = this.rowFrom[j]!;
+        const b = this.rowTo[j]!;
+        return [lu.slot(a, a), lu.slot(a, b), lu.slot(b, a), lu.slot(b, b)];
+      }),
+    );
+    // Volume couplings: a passage's flow depends on a chamber's pressure, which depends on its piston's position.
+    const couplingStart = new Int32Array(this.spec.restrictions.length + 1);
+    const couplingSlots: number[] = [];
+    const couplingPiston: number[] = [];
+    const couplingEnd: number[] = [];
+    const couplingDvdx: number[] = [];
+    const couplingExponent: number[] = [];
+    this.spec.restrictions.forEach((r, j) => {
       const spec = restrictions[r]!;
-      return [spec.from, spec.to].flatMap((end, e) =>
-        nodes[end]!.chambers.map((c) => {
-          const x = this.xIndex[pistonLocal.get(c.piston)!]!;
-          return [lu.slot(this.rowFrom[j]!, x), lu.slot(this.rowTo[j]!, x), c.piston, e] as [number, number, number, number];
-        }),
-      );
+      [spec.from, spec.to].forEach((end, e) => {
+        for (const k of new Set(nodes[end]!.chambers.map((c) => c.piston))) {
+          const x = this.xIndex[pistonLocal.get(k)!]!;
+          couplingSlots.push(lu.slot(this.rowFrom[j]!, x), lu.slot(this.rowTo[j]!, x));
+          couplingPiston.push(k);
+          couplingEnd.push(e);
+          couplingDvdx.push(this.dvdx(end, k));
+          couplingExponent.push(nodes[end]!.polytropicExponent ?? 1);
+        }
+      });
+      couplingStart[j + 1] = couplingPiston.length;
     });
-    const modulator = this.spec.restrictions.map((r, j) => {
-      const spec = restrictions[r]!;
-      return spec.modulator ? Int32Array.of(lu.slot(this.rowFrom[j]!, local(spec.modulator.control)), lu.slot(this.rowTo[j]!, local(spec.modulator.control))) : new Int32Array(0);
-    });
-    const piston = this.spec.pistons.map((k, j) => {
-      const p = pistons[k]!;
-      const x = this.xIndex[j]!;
-      const v = this.vIndex[j]!;
-      return Int32Array.of(lu.slot(x, v), lu.slot(v, local(p.capNode)), p.rodNode === null ? -1 : lu.slot(v, local(p.rodNode)), lu.slot(v, x), lu.slot(v, v));
-    });
-    return { lu, slots: { diag, restriction, chamberX, modulator, piston } };
+    const modulator = Int32Array.from(
+      this.spec.restrictions.flatMap((r, j) => {
+        const spec = restrictions[r]!;
+        return spec.modulator ? [lu.slot(this.rowFrom[j]!, local(spec.modulator.control)), lu.slot(this.rowTo[j]!, local(spec.modulator.control))] : [-1, -1];
+      }),
+    );
+    const piston = Int32Array.from(
+      this.spec.pistons.flatMap((k, j) => {
+        const p = pistons[k]!;
+        const x = this.xIndex[j]!;
+        const v = this.vIndex[j]!;
+        return [lu.slot(x, v), lu.slot(v, local(p.capNode)), p.rodNode === null ? -1 : lu.slot(v, local(p.rodNode)), lu.slot(v, x), lu.slot(v, v)];
+      }),
+    );
+    return {
+      lu,
+      slots: {
+        diag,
+        restriction,
+        couplingStart,
+        couplingSlots: Int32Array.from(couplingSlots),
+        couplingPiston: Int32Array.from(couplingPiston),
+        couplingEnd: Uint8Array.from(couplingEnd),
+        couplingDvdx: Float64Array.from(couplingDvdx),
+        couplingExponent: Float64Array.from(couplingExponent),
+        modulator,
+        piston,
+        pistonDvdx: Float64Array.from(this.spec.pistons.flatMap((k) => [this.dvdx(pistons[k]!.capNode, k), pistons[k]!.rodNode === null ? 0 : this.dvdx(pistons[k]!.rodNode!, k)])),
+      },
+    };
   }
 
-  /** ∂p/∂m of a node (0 for boundary nodes): n·p/m, which is RT/V when isothermal. */
-  private dpdm(node: number): number {
-    return this.w.model.nodes[node]!.fixed ? 0 : this.w.pressurePerMass[node]!;
-  }
-
-  /** ∂p/∂x of a node through the chamber of piston k: −n·p/V·∂V/∂x. */
-  private dpdx(node: number, k: number): number {
+  /** ∂V/∂x of a node through the chambers of piston k (+A on the cap side, −a on the rod side), m². */
+  private dvdx(node: number, k: number): number {
     const p = this.w.model.pistons[k]!;
-    const n = this.w.model.nodes[node]!.polytropicExponent ?? 1;
     let dv = 0;
     for (const c of this.w.model.nodes[node]!.chambers) if (c.piston === k) dv += c.side === 'cap' ? p.capArea : -p.rodSideArea;
-    return ((-n * this.w.pressure[node]!) / this.w.volume[node]!) * dv;
+    return dv;
   }
 
-  /** W = I − γhJ at the committed state (the world's work arrays must describe it). */
+  /**
+   * W = I − γhJ at the committed state (the world's work arrays must describe it). ∂p/∂m of a
+   * free node is n·p/m (RT/V when isothermal), 0 on a boundary; ∂p/∂x through a chamber of
+   * piston k is −n·p/V·∂V/∂x.
+   */
   private assembleW(h: number): void {
     const v = this.lu.values;
     const c = -GAMMA * h;
     const w = this.w;
+    const pressurePerMass = w.pressurePerMass;
+    const pressure = w.pressure;
+    const volume = w.volume;
+    const mode = w.mode;
+    const slots = this.slots;
+    const rs = slots.restriction;
     v.fill(0);
-    const diag = this.slots.diag;
+    const diag = slots.diag;
     for (let i = 0; i < diag.length; i += 1) v[diag[i]!] = 1;
-    const { restrictions, pistons } = w.model;
     for (let j = 0; j < this.rIndex.length; j += 1) {
       const r = this.rIndex[j]!;
-      const slots = this.slots.restriction[j]!;
       const from = this.rFromNode[j]!;
       const to = this.rToNode[j]!;
-      // dm_from/dt = −q and dm_to/dt = +q; ∂p/∂m = RT/V on free nodes, 0 on boundaries.
-      const ja = this.rFromFree[j] ? w.dFlowA[r]! * w.pressurePerMass[from]! : 0;
-      const jb = this.rToFree[j] ? w.dFlowB[r]! * w.pressurePerMass[to]! : 0;
-      v[slots[0]!] = v[slots[0]!]! - c * ja;
-      v[slots[2]!] = v[slots[2]!]! + c * ja;
-      v[slots[1]!] = v[slots[1]!]! - c * jb;
-      v[slots[3]!] = v[slots[3]!]! + c * jb;
-      const couplings = this.slots.chamberX[j]!;
-      for (let n = 0; n < couplings.length; n += 1) {
-        const coupling = couplings[n]!;
-        const k = coupling[2];
-        if (w.mode[k] !== 'free') continue;
-        const node = coupling[3] === 0 ? from : to;
-        const jx = (coupling[3] === 0 ? w.dFlowA[r]! : w.dFlowB[r]!) * this.dpdx(node, k);
-        v[coupling[0]] = v[coupling[0]]! - c * jx;
-        v[coupling[1]] = v[coupling[1]]! + c * jx;
+      // dm_from/dt = −q and dm_to/dt = +q.
+      const ja = this.rFromFree[j] ? w.dFlowA[r]! * pressurePerMass[from]! : 0;
+      const jb = this.rToFree[j] ? w.dFlowB[r]! * pressurePerMass[to]! : 0;
+      const at = 4 * j;
+      v[rs[at]!] = v[rs[at]!]! - c * ja;
+      v[rs[at + 2]!] = v[rs[at + 2]!]! + c * ja;
+      v[rs[at + 1]!] = v[rs[at + 1]!]! - c * jb;
+      v[rs[at + 3]!] = v[rs[at + 3]!]! + c * jb;
+      for (let n = slots.couplingStart[j]!; n < slots.couplingStart[j + 1]!; n += 1) {
+        if (mode[slots.couplingPiston[n]!] !== 'free') continue;
+        const fromEnd = slots.couplingEnd[n] === 0;
+        const node = fromEnd ? from : to;
+        const dpdx = ((-slots.couplingExponent[n]! * pressure[node]!) / volume[node]!) * slots.couplingDvdx[n]!;
+        const jx = (fromEnd ? w.dFlowA[r]! : w.dFlowB[r]!) * dpdx;
+        const s0 = slots.couplingSlots[2 * n]!;
+        const s1 = slots.couplingSlots[2 * n + 1]!;
+        v[s0] = v[s0]! - c * jx;
+        v[s1] = v[s1]! + c * jx;
       }
       if (this.rModulated[j]) {
-        const mod = this.slots.modulator[j]!;
-        const jc = w.dFlowC[r]! * this.dpdm(restrictions[r]!.modulator!.control);
-        v[mod[0]!] = v[mod[0]!]! - c * jc;
-        v[mod[1]!] = v[mod[1]!]! + c * jc;
+        const control = this.w.model.restrictions[r]!.modulator!.control;
+        const jc = w.dFlowC[r]! * (w.isFixed[control] ? 0 : pressurePerMass[control]!);
+        const m0 = slots.modulator[2 * j]!;
+        const m1 = slots.modulator[2 * j + 1]!;
+        v[m0] = v[m0]! - c * jc;
+        v[m1] = v[m1]! + c * jc;
       }
     }
+    const pistons = w.model.pistons;
+    const ps = slots.piston;
     for (let j = 0; j < this.pIndex.length; j += 1) {
       const k = this.pIndex[j]!;
-      if (w.mode[k] !== 'free') continue;
+      if (mode[k] !== 'free') continue;
       const p = pistons[k]!;
-      const slots = this.slots.piston[j]!;
+      const at = 5 * j;
       const mass = p.movingMassKg;
-      v[slots[0]!] = v[slots[0]!]! + c;
-      v[slots[1]!] = v[slots[1]!]! + (c * p.capArea * this.dpdm(p.capNode)) / mass;
-      if (p.rodNode !== null) v[slots[2]!] = v[slots[2]!]! - (c * p.rodSideArea * this.dpdm(p.rodNode)) / mass;
-      const dFdx = p.capArea * this.dpdx(p.capNode, k) - (p.rodNode === null ? 0 : p.rodSideArea * this.dpdx(p.rodNode, k)) - p.springRateNPerM;
-      v[slots[3]!] = v[slots[3]!]! + (c * dFdx) / mass;
-      v[slots[4]!] = v[slots[4]!]! + (c * -p.viscousNsPerM) / mass;
+      const cap = p.capNode;
+      const rod = p.rodNode;
+      v[ps[at]!] = v[ps[at]!]! + c;
+      v[ps[at + 1]!] = v[ps[at + 1]!]! + (c * p.capArea * (w.isFixed[cap] ? 0 : pressurePerMass[cap]!)) / mass;
+      if (rod !== null) v[ps[at + 2]!] = v[ps[at + 2]!]! - (c * p.rodSideArea * (w.isFixed[rod] ? 0 : pressurePerMass[rod]!)) / mass;
+      const capExponent = this.w.model.nodes[cap]!.polytropicExponent ?? 1;
+      let dFdx = (p.capArea * (-capExponent * pressure[cap]!) * slots.pistonDvdx[2 * j]!) / volume[cap]! - p.springRateNPerM;
+      if (rod !== null) {
+        const rodExponent = this.w.model.nodes[rod]!.polytropicExponent ?? 1;
+        dFdx -= (p.rodSideArea * (-rodExponent * pressure[rod]!) * slots.pistonDvdx[2 * j + 1]!) / volume[rod]!;
+      }
+      v[ps[at + 3]!] = v[ps[at + 3]!]! + (c * dFdx) / mass;
+      v[ps[at + 4]!] = v[ps[at + 4]!]! + (c * -p.viscousNsPerM) / mass;
     }
   }
 }

@@ -122,11 +122,14 @@ class Run implements GuardSource, OutputRows {
   /** (column, node) pairs of port pressures held by boundaries, and (column, passage) pairs of passages between boundaries. */
   private boundaryPortColumns = new Int32Array(0);
   private boundaryFlowColumns = new Int32Array(0);
-  /** Each behaviour's signal values as of its last action, and where they start in a trace row. */
-  private readonly signalValues: Float64Array[];
+  /** How many signals each behaviour has, and where they start in a trace row. */
+  private readonly signalCount: number[];
   private readonly signalColumn: Int32Array;
-  /** Behaviours whose signals follow shared state: all are read again when one of them acts. */
-  private readonly sharingState: number[];
+  /**
+   * The columns no partition fills, kept up to date: behaviour signals as of each behaviour's
+   * last action (or its contacts' last change), boundary pressures and flows when rows are sent.
+   */
+  private constants = new Float64Array(0);
 
   constructor(model: SolverModel, options: SimulationOptions, sink?: TraceSink) {
     this.m = model;
@@ -153,19 +156,21 @@ class Run implements GuardSource, OutputRows {
         this.partitionsOfFixedNode.set(node, [...(this.partitionsOfFixedNode.get(node) ?? []), i]);
       }
     });
-    this.partitionsOwnedBy = model.behaviours.map((entry) => {
-      const owned = new Set<number>();
-      model.restrictions.forEach((r, index) => {
-        if (r.owner === entry.componentId && this.partitionOfRestriction[index]! >= 0) owned.add(this.partitionOfRestriction[index]!);
-      });
-      model.pistons.forEach((p, k) => {
-        if (p.owner === entry.componentId) owned.add(this.partitionOfPiston[k]!);
-      });
-      return [...owned].sort((a, b) => a - b);
+    const owned = new Map<string, Set<number>>();
+    const modulated = new Map<string, Set<number>>();
+    const note = (map: Map<string, Set<number>>, owner: string, partition: number) => {
+      if (partition < 0) return;
+      if (!map.has(owner)) map.set(owner, new Set());
+      map.get(owner)!.add(partition);
+    };
+    model.restrictions.forEach((r, index) => {
+      note(owned, r.owner, this.partitionOfRestriction[index]!);
+      if (r.modulator) note(modulated, r.owner, this.partitionOfRestriction[index]!);
     });
-    this.modulatedBy = model.behaviours.map((entry) => [
-      ...new Set(model.restrictions.flatMap((r, index) => (r.owner === entry.componentId && r.modulator && this.partitionOfRestriction[index]! >= 0 ? [this.partitionOfRestriction[index]!] : []))),
-    ]);
+    model.pistons.forEach((p, k) => note(owned, p.owner, this.partitionOfPiston[k]!));
+    const sorted = (set: Set<number> | undefined) => [...(set ?? [])].sort((a, b) => a - b);
+    this.partitionsOwnedBy = model.behaviours.map((entry) => sorted(owned.get(entry.componentId)));
+    this.modulatedBy = model.behaviours.map((entry) => sorted(modulated.get(entry.componentId)));
     const holders = new Set(model.nodes.flatMap((n) => (n.fixed && n.holder ? [n.holder] : [])));
     const every = Int32Array.from(this.partitions.keys());
     this.touchOf = model.behaviours.map((entry, b) => {
@@ -181,9 +186,8 @@ class Run implements GuardSource, OutputRows {
     this.inputTimes = this.partitions.map(() => new Float64Array(0));
     this.inputNext = new Int32Array(this.partitions.length);
     this.synced = new Uint8Array(this.partitions.length);
-    this.signalValues = model.behaviours.map((b) => Float64Array.from(Object.values(b.behaviour.signals?.() ?? {})));
+    this.signalCount = model.behaviours.map((b) => Object.keys(b.behaviour.signals?.() ?? {}).length);
     this.signalColumn = new Int32Array(model.behaviours.length);
-    this.sharingState = model.behaviours.flatMap((b, i) => (b.behaviour.sharesState ? [i] : []));
     this.initialBudget = this.airBudget();
   }
 
@@ -223,8 +227,10 @@ class Run implements GuardSource, OutputRows {
     this.boundaryFlowColumns = Int32Array.from(boundaryFlows);
     this.m.behaviours.forEach((_, b) => {
       this.signalColumn[b] = col;
-      col += this.signalValues[b]!.length;
+      col += this.signalCount[b]!;
     });
+    this.constants = new Float64Array(width);
+    this.m.behaviours.forEach((_, b) => this.readSignals(b));
     this.partitions.forEach((p, i) => p.setOutputs(columns[i]!.cols, columns[i]!.kinds, columns[i]!.sources, this));
     const constant: number[] = [];
     for (let c = 0; c < width; c += 1) if (!owned[c]) constant.push(c);
@@ -237,16 +243,17 @@ class Run implements GuardSource, OutputRows {
    * sink. Every partition has passed them; the columns no partition fills change only at
    * handled instants, so they are taken as they are now.
    */
-  private flushRows(reached: number, inclusive: boolean, sample: Float64Array): void {
+  private flushRows(reached: number, inclusive: boolean): void {
     const limit = inclusive ? reached + SAME_TIME_S : reached - SAME_TIME_S;
     const last = this.untilS - SAME_TIME_S;
     if (this.firstPending * this.intervalS >= limit || this.firstPending * this.intervalS >= last) return;
-    this.sampleConstants(sample);
+    this.sampleBoundaries();
     const constant = this.constantColumns;
+    const values = this.constants;
     while (this.firstPending * this.intervalS < limit && this.firstPending * this.intervalS < last) {
       const k = this.firstPending;
       const row = this.pending[k % PENDING_ROWS]!;
-      for (let i = 0; i < constant.length; i += 1) row[constant[i]!] = sample[constant[i]!]!;
+      for (let i = 0; i < constant.length; i += 1) row[constant[i]!] = values[constant[i]!]!;
       this.sink.sample(k * this.intervalS, row);
       this.firstPending += 1;
     }
@@ -372,7 +379,7 @@ class Run implements GuardSource, OutputRows {
    */
   private handle(t: number, sample: Float64Array): void {
     this.time = t;
-    this.flushRows(t, false, sample);
+    this.flushRows(t, false);
     this.beginInstant(t);
     this.fireCrossings();
     while (this.inputCursor < this.inputs.length && this.inputs[this.inputCursor]!.t <= t + SAME_TIME_S) this.applyInput(this.inputs[this.inputCursor++]!);
@@ -386,7 +393,7 @@ class Run implements GuardSource, OutputRows {
       if (Math.abs(k * this.intervalS - t) <= SAME_TIME_S) {
         // The row at this instant shows the state after what happened at it.
         for (const i of this.syncedList) this.partitions[i]!.writeRow(k);
-        this.flushRows(t, true, sample);
+        this.flushRows(t, true);
       }
     }
     this.endInstant();
@@ -541,10 +548,10 @@ class Run implements GuardSource, OutputRows {
     this.currentBehaviour = index;
     for (const i of this.syncedList) this.partitions[i]!.ensureFresh();
     const behaviour = this.m.behaviours[index]!.behaviour;
-    const contacts = this.m.control.version;
     fn(behaviour);
     this.readSignals(index);
-    if (this.m.control.version !== contacts) for (const b of this.sharingState) this.readSignals(b);
+    // Contacts that follow a coil changed with it: their components show it.
+    for (const id of this.m.control.drainChanged()) this.readSignals(this.m.componentIds.get(id)!);
     // A behaviour may change what its passages do without touching an opening (a regulator's set point);
     // changed openings wake their partitions themselves.
     for (const p of this.modulatedBy[index]!) this.partitions[p]!.wake();
@@ -554,8 +561,10 @@ class Run implements GuardSource, OutputRows {
   }
 
   private readSignals(index: number): void {
-    const behaviour = this.m.behaviours[index]!.behaviour;
-    if (behaviour.signals) this.signalValues[index]!.set(Object.values(behaviour.signals()));
+    const signals = this.m.behaviours[index]!.behaviour.signals?.();
+    if (!signals) return;
+    let col = this.signalColumn[index]!;
+    for (const key in signals) this.constants[col++] = signals[key]!;
   }
 
   /**
@@ -658,14 +667,14 @@ class Run implements GuardSource, OutputRows {
     this.sink.sample(this.time, out);
   }
 
-  /** The columns no partition fills, as they are now. */
-  private sampleConstants(out: Float64Array): void {
+  /** Boundary pressures and the flows between boundaries into the constant columns, as they are now. */
+  private sampleBoundaries(): void {
     const w = this.w;
+    const out = this.constants;
     const ports = this.boundaryPortColumns;
     for (let j = 0; j < ports.length; j += 2) out[ports[j]!] = w.pressure[ports[j + 1]!]!;
     const flows = this.boundaryFlowColumns;
     for (let j = 0; j < flows.length; j += 2) out[flows[j]!] = this.boundaryFlow(flows[j + 1]!);
-    this.signalValues.forEach((values, b) => out.set(values, this.signalColumn[b]!));
   }
 
   /** Flow through a passage between two boundaries: nothing integrates it, but it is still worth showing. */
@@ -689,9 +698,6 @@ class Run implements GuardSource, OutputRows {
         out[i++] = this.partitionOfRestriction[r]! >= 0 ? w.flow[r]! : this.boundaryFlow(r);
       }
     }
-    this.signalValues.forEach((values) => {
-      out.set(values, i);
-      i += values.length;
-    });
+    out.set(this.constants.subarray(i), i);
   }
 }

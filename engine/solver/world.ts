@@ -18,6 +18,8 @@ export class World {
   /** ∂p/∂m of each free node at the last evaluation, Pa/kg (RT/V when isothermal, n·p/m when polytropic). */
   readonly pressurePerMass: Float64Array;
   readonly fixedPressure: Float64Array;
+  /** 1 for boundary nodes (atmosphere, ideal supplies), whose pressure no flow changes. */
+  readonly isFixed: Uint8Array;
   readonly opening: Float64Array;
   readonly gain: Float64Array;
   readonly flow: Float64Array;
@@ -40,6 +42,7 @@ export class World {
     this.volume = new Float64Array(nn);
     this.pressurePerMass = new Float64Array(nn);
     this.fixedPressure = Float64Array.from(model.nodes, (n) => n.fixedPressurePa);
+    this.isFixed = Uint8Array.from(model.nodes, (n) => (n.fixed ? 1 : 0));
     this.opening = Float64Array.from(model.restrictions, (r) => r.opening);
     this.gain = Float64Array.from(model.restrictions, (r) => chokedGain(r.conductance, model.temperatureK));
     this.flow = new Float64Array(nr);
