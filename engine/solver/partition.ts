@@ -5,6 +5,9 @@ import type { World } from './world';
 /** Events are located to within this time, s. */
 export const EVENT_TOLERANCE_S = 1e-6;
 
+/** The (never modified) empty crossing list, so that a step without crossings allocates nothing. */
+const NO_CROSSINGS: readonly number[] = [];
+
 // ROS34PW2 (J. Rang & L. Angermann, "New Rosenbrock W-methods of order 3 for partial
 // differential algebraic equations of index 1", BIT Numer. Math. 45 (2005) 761–787):
 // four stages, order 3 with an embedded order-2 solution, L-stable and stiffly accurate,
@@ -198,7 +201,7 @@ export class Partition {
   guardValues: number[] = [];
   guardOwners: number[] = [];
   /** Guards that crossed zero at the end of the last advance. */
-  crossed: number[] = [];
+  crossed: readonly number[] = NO_CROSSINGS;
 
   private readonly snapY: Float64Array;
   private snapTime = 0;
@@ -207,6 +210,9 @@ export class Partition {
   private snapQuiescent = false;
   private snapGuards: number[] = [];
   private snapOwners: number[] = [];
+  /** Spare guard lists that a step fills and then swaps with the committed ones (no garbage per step). */
+  private spareGuards: number[] = [];
+  private spareOwners: number[] = [];
   // Trace columns this partition fills between meeting points, and their values at the committed state.
   private outCols = new Int32Array(0);
   private outKind = new Uint8Array(0);
@@ -422,11 +428,14 @@ export class Partition {
   restore(): void {
     this.undoable = false;
     this.time = this.snapTime;
-    this.crossed = [];
+    this.crossed = NO_CROSSINGS;
     if (this.snapQuiescent) return;
     this.y.set(this.snapY);
     this.h = this.snapH;
     this.quiescent = false;
+    // The undone step's lists become the spares; the snapshot's are committed again.
+    this.spareGuards = this.guardValues;
+    this.spareOwners = this.guardOwners;
     this.guardValues = this.snapGuards;
     this.guardOwners = this.snapOwners;
     this.fValid = false;
@@ -452,7 +461,7 @@ export class Partition {
    * `restore()` after it undo the step.
    */
   advanceStep(until: number): void {
-    this.crossed = [];
+    this.crossed = NO_CROSSINGS;
     if (this.quiescent) {
       this.writeRows(this.time, until, false);
       this.time = until;
@@ -481,21 +490,23 @@ export class Partition {
         if (h < 1e-12) throw new Error('step size underflow: the circuit could not be integrated');
         continue;
       }
-      const after: number[] = [];
-      const owners: number[] = [];
+      const after = this.spareGuards;
+      const owners = this.spareOwners;
+      after.length = 0;
+      owners.length = 0;
       this.collectGuards(after, owners);
       let theta = 1;
-      const crossed: number[] = [];
+      let crossed: number[] | null = null;
       const before = this.guardValues;
       for (let i = 0; i < after.length; i += 1) {
         const g0 = before[i]!;
         const g1 = after[i]!;
         if ((g0 < 0 && g1 >= 0) || (g0 > 0 && g1 <= 0)) {
-          crossed.push(i);
+          (crossed ??= []).push(i);
           theta = Math.min(theta, g0 / (g0 - g1));
         }
       }
-      if (crossed.length && (1 - theta) * h > EVENT_TOLERANCE_S && h > EVENT_TOLERANCE_S) {
+      if (crossed && (1 - theta) * h > EVENT_TOLERANCE_S && h > EVENT_TOLERANCE_S) {
         this.fValid = false;
         this.writePositions(this.y);
         h = Math.max(theta * h + EVENT_TOLERANCE_S / 2, EVENT_TOLERANCE_S / 2);
@@ -519,13 +530,15 @@ export class Partition {
       this.f = this.fCandidate;
       this.fCandidate = f;
       this.fValid = true;
+      this.spareGuards = this.guardValues;
+      this.spareOwners = this.guardOwners;
       this.guardValues = after;
       this.guardOwners = owners;
       const grow = err > 0 ? Math.min(4, Math.max(0.2, 0.9 * Math.pow(err, -1 / 3))) : 4;
       // A step cut short only to land on a meeting point says nothing against the step size
       // the controller wanted: keep that for the next step.
       this.h = Math.max(landsOnStop && !shortened && grow >= 1 ? Math.max(h * grow, wanted) : h * grow, 1e-9);
-      if (crossed.length) {
+      if (crossed) {
         this.crossed = crossed;
         return 'crossed';
       }
