@@ -261,4 +261,35 @@ describe('control circuit co-simulation', () => {
     expect(operations).toBeGreaterThan(120);
     expect(operations).toBeLessThan(140);
   });
+
+  it('a counter counts pulses to its preset, operates its contacts, ignores pulses while reset and starts again from zero', () => {
+    const circuit = new TestCircuit()
+      .add('ps', 'dc-supply', {}, 'G1')
+      .add('S1', 'pushbutton-no')
+      .add('S2', 'pushbutton-no')
+      .add('C1', 'counter', { preset: 2 })
+      .add('C1a', 'relay-contact-no', { coil: 'C1' })
+      .add('H1', 'indicator-lamp')
+      .wire('ps:L+', 'S1:13')
+      .wire('S1:14', 'C1:A1')
+      .wire('C1:A2', 'ps:M')
+      .wire('ps:L+', 'S2:13')
+      .wire('S2:14', 'C1:R1')
+      .wire('C1:R2', 'ps:M')
+      .wire('ps:L+', 'C1a:13')
+      .wire('C1a:14', 'H1:X1')
+      .wire('H1:X2', 'ps:M');
+    const pulse = (t: number, button: string) => [press(t, button), release(t + 0.05, button)];
+    const trace = run(circuit, [...pulse(0.1, 'S1'), ...pulse(0.3, 'S1'), press(0.5, 'S2'), ...pulse(0.6, 'S1'), release(0.8, 'S2'), ...pulse(1.0, 'S1')], 1.2);
+    expect(at(trace, 'C1:count', 0.2)).toBe(1);
+    expect(at(trace, 'H1:lit', 0.2)).toBe(0);
+    expect(at(trace, 'C1:count', 0.4)).toBe(2);
+    expect(at(trace, 'H1:lit', 0.4)).toBe(1);
+    // Reset held: back to zero, contacts returned, and a pulse meanwhile is not counted.
+    expect(at(trace, 'C1:count', 0.55)).toBe(0);
+    expect(at(trace, 'H1:lit', 0.55)).toBe(0);
+    expect(at(trace, 'C1:count', 0.7)).toBe(0);
+    expect(at(trace, 'C1:count', 1.1)).toBe(1);
+    expect(trace.events.filter((e) => e.componentId === 'C1').map((e) => `${e.kind}${e.detail ? ` ${e.detail}` : ''}`)).toEqual(['counted 1', 'counted 2', 'reset', 'counted 1']);
+  });
 });
