@@ -115,8 +115,10 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
   const hysteresis = ctx.num('pilotHysteresis');
   const manualOverride = ctx.flag('manualOverride');
   const threePosition = def.positions.length === 3;
-  // Side b is driven when the return is pilot or solenoid (double-acting valves), and always on 5/3.
-  const sideBActuation: Actuation | null = threePosition ? actuation : returnBy === 'pilot' ? 'pilot' : returnBy === 'solenoid' ? 'solenoid' : null;
+  // Side b is driven when the return is pilot or solenoid (double-acting valves), and always on 5/3;
+  // a detented lever or selector is moved back by the same hand, so it works both sides.
+  const detentedHandle = (actuation === 'lever-detent' || actuation === 'selector-detent') && returnBy === 'detent';
+  const sideBActuation: Actuation | null = threePosition || detentedHandle ? actuation : returnBy === 'pilot' ? 'pilot' : returnBy === 'solenoid' ? 'solenoid' : null;
 
   // One restriction per port pair that any position joins.
   const pairs = new Map<string, RestrictionRef>();

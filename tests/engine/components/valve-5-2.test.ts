@@ -17,6 +17,17 @@ describe('valve-5-2', () => {
     ]);
   });
 
+  it('with a detented lever: stays where it is put and is moved back by the same lever (side b)', () => {
+    expectValveSteps('valve-5-2', { actuation: 'lever-detent', returnBy: 'detent' }, ['2', '4'], [
+      { actions: [], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ action: 'press' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ action: 'release' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+      { actions: [{ action: 'press', parameter: 'b' }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ action: 'release', parameter: 'b' }], position: 1, ports: { '2': 'supply', '4': 'ambient' } },
+      { actions: [{ action: 'press' }], position: 0, ports: { '2': 'ambient', '4': 'supply' } },
+    ]);
+  });
+
   it('with pilot and spring return: follows pilot 14 and springs back when it is vented', () => {
     // Pilot 14 fed from pushbutton valve `pa`.
     expectPilotSteps({ actuation: 'pilot', returnBy: 'spring' }, [
