@@ -48,16 +48,21 @@ export interface TraceSink {
 /** A sink that keeps everything in memory and hands back a Trace. */
 export class MemoryTraceSink implements TraceSink {
   private readonly time: number[] = [];
-  private signals: TraceSignal[] = [];
+  private names: ReadonlyArray<{ name: string; unit: SignalUnit }> = [];
+  /** Rows as they come, in blocks of ROWS_PER_BLOCK; turned into one array per signal at the end. */
+  private readonly blocks: Float64Array[] = [];
   private readonly events: TraceEvent[] = [];
 
   begin(signals: ReadonlyArray<{ name: string; unit: SignalUnit }>): void {
-    this.signals = signals.map((s) => ({ name: s.name, unit: s.unit, values: [] }));
+    this.names = signals;
   }
 
   sample(t: number, values: Float64Array): void {
+    const width = this.names.length;
+    const row = this.time.length % ROWS_PER_BLOCK;
+    if (row === 0) this.blocks.push(new Float64Array(ROWS_PER_BLOCK * width));
+    this.blocks[this.blocks.length - 1]!.set(values.subarray(0, width), row * width);
     this.time.push(t);
-    for (let i = 0; i < this.signals.length; i += 1) this.signals[i]!.values.push(values[i]!);
   }
 
   event(event: TraceEvent): void {
@@ -65,9 +70,19 @@ export class MemoryTraceSink implements TraceSink {
   }
 
   toTrace(intervalS: number, stats: TraceStats): Trace {
-    return { formatVersion: TRACE_FORMAT_VERSION, intervalS, time: this.time, signals: this.signals, events: this.events, stats };
+    const width = this.names.length;
+    const rows = this.time.length;
+    const signals: TraceSignal[] = this.names.map((s, i) => {
+      const values = new Array<number>(rows);
+      for (let k = 0; k < rows; k += 1) values[k] = this.blocks[Math.floor(k / ROWS_PER_BLOCK)]![(k % ROWS_PER_BLOCK) * width + i]!;
+      return { name: s.name, unit: s.unit, values };
+    });
+    return { formatVersion: TRACE_FORMAT_VERSION, intervalS, time: this.time, signals, events: this.events, stats };
   }
 }
+
+/** Rows a MemoryTraceSink keeps per block: a sample is one contiguous copy, not a push per signal. */
+const ROWS_PER_BLOCK = 256;
 
 /** Looks a signal up by name; undefined when the trace has none. */
 export function signal(trace: Trace, name: string): TraceSignal | undefined {
