@@ -172,6 +172,10 @@ export class Partition {
   /** Absolute mass tolerance of each free node at the start of the step, kg. */
   private readonly massScaleOf: Float64Array;
   private fValid = false;
+  /** Local indices of the passages that can carry flow (opening above zero), rebuilt when an opening changes. */
+  private readonly active: Int32Array;
+  private activeCount = 0;
+  private activeStale = true;
   private readonly scratch = { flow: 0, dFlowdPa: 0, dFlowdPb: 0 };
   private readonly lu: SparseLu;
   /** Where each Jacobian term goes in the LU's value array, flattened per restriction (4), coupling (2), modulator (2) and piston (5). */
@@ -291,6 +295,7 @@ export class Partition {
     this.stage = new Float64Array(n);
     this.fStage = new Float64Array(n);
     this.errVec = new Float64Array(n);
+    this.active = new Int32Array(spec.restrictions.length);
     this.u1 = new Float64Array(n);
     this.u2 = new Float64Array(n);
     this.u3 = new Float64Array(n);
@@ -317,6 +322,7 @@ export class Partition {
 
   /** Re-evaluates the committed state after a discrete change; wakes a quiescent partition. */
   wake(): void {
+    this.activeStale = true;
     this.quiescent = false;
     this.fValid = false;
     this.dirty = true;
@@ -708,10 +714,12 @@ export class Partition {
       }
     }
     f.fill(0);
+    if (this.activeStale) this.findActive();
     const scratch = this.scratch;
     const restrictions = w.model.restrictions;
-    const count = this.rIndex.length;
-    for (let j = 0; j < count; j += 1) {
+    const active = this.active;
+    for (let n = 0; n < this.activeCount; n += 1) {
+      const j = active[n]!;
       const r = this.rIndex[j]!;
       let k = w.opening[r]!;
       let dk = 0;
@@ -754,6 +762,24 @@ export class Partition {
       f[this.vIndex[j]!] = (w.driveForce(k) - friction) / p.movingMassKg;
     }
     return physical;
+  }
+
+  /** Lists the passages with an opening above zero; the closed ones carry no flow until one changes. */
+  private findActive(): void {
+    const w = this.w;
+    let count = 0;
+    for (let j = 0; j < this.rIndex.length; j += 1) {
+      const r = this.rIndex[j]!;
+      if (w.opening[r]! > 0) this.active[count++] = j;
+      else {
+        w.flow[r] = 0;
+        w.dFlowA[r] = 0;
+        w.dFlowB[r] = 0;
+        w.dFlowC[r] = 0;
+      }
+    }
+    this.activeCount = count;
+    this.activeStale = false;
   }
 
   private collectGuards(out: number[], owners: number[]): void {
@@ -897,7 +923,9 @@ export class Partition {
     v.fill(0);
     const diag = slots.diag;
     for (let i = 0; i < diag.length; i += 1) v[diag[i]!] = 1;
-    for (let j = 0; j < this.rIndex.length; j += 1) {
+    const active = this.active;
+    for (let a = 0; a < this.activeCount; a += 1) {
+      const j = active[a]!;
       const r = this.rIndex[j]!;
       const from = this.rFromNode[j]!;
       const to = this.rToNode[j]!;
