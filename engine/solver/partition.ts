@@ -1,5 +1,6 @@
 import { ISO_LINEAR_REGION_EPSILON, isoLinearRegionPhi, signedIsoFlowPreparedInto } from '../calc/iso6358';
 import { SparseLu } from './sparse-lu';
+import { flags, floats, ints } from './typed-arrays';
 import type { World } from './world';
 
 /** Events are located to within this time, s. */
@@ -247,22 +248,22 @@ export class Partition {
       this.vIndex[j] = n++;
     });
     this.nState = n;
-    this.rowFrom = Int32Array.from(spec.restrictions, (r) => this.localOfNode.get(restrictions[r]!.from)!);
-    this.rowTo = Int32Array.from(spec.restrictions, (r) => this.localOfNode.get(restrictions[r]!.to)!);
+    this.rowFrom = ints(spec.restrictions, (r) => this.localOfNode.get(restrictions[r]!.from)!);
+    this.rowTo = ints(spec.restrictions, (r) => this.localOfNode.get(restrictions[r]!.to)!);
     const nodes = world.model.nodes;
     this.rIndex = Int32Array.from(spec.restrictions);
-    this.rFromNode = Int32Array.from(spec.restrictions, (r) => restrictions[r]!.from);
-    this.rToNode = Int32Array.from(spec.restrictions, (r) => restrictions[r]!.to);
-    this.rCritical = Float64Array.from(spec.restrictions, (r) => restrictions[r]!.criticalRatio);
-    this.rCracking = Float64Array.from(spec.restrictions, (r) => (restrictions[r]!.oneWay ? (restrictions[r]!.crackingPa ?? 0) : 0));
-    this.rOneWay = Uint8Array.from(spec.restrictions, (r) => (restrictions[r]!.oneWay ? 1 : 0));
-    this.rModulated = Uint8Array.from(spec.restrictions, (r) => (restrictions[r]!.modulator ? 1 : 0));
-    this.rFromFree = Uint8Array.from(spec.restrictions, (r) => (nodes[restrictions[r]!.from]!.fixed ? 0 : 1));
-    this.rToFree = Uint8Array.from(spec.restrictions, (r) => (nodes[restrictions[r]!.to]!.fixed ? 0 : 1));
+    this.rFromNode = ints(spec.restrictions, (r) => restrictions[r]!.from);
+    this.rToNode = ints(spec.restrictions, (r) => restrictions[r]!.to);
+    this.rCritical = floats(spec.restrictions, (r) => restrictions[r]!.criticalRatio);
+    this.rCracking = floats(spec.restrictions, (r) => (restrictions[r]!.oneWay ? (restrictions[r]!.crackingPa ?? 0) : 0));
+    this.rOneWay = flags(spec.restrictions, (r) => restrictions[r]!.oneWay === true);
+    this.rModulated = flags(spec.restrictions, (r) => restrictions[r]!.modulator !== undefined);
+    this.rFromFree = flags(spec.restrictions, (r) => !nodes[restrictions[r]!.from]!.fixed);
+    this.rToFree = flags(spec.restrictions, (r) => !nodes[restrictions[r]!.to]!.fixed);
     this.pIndex = Int32Array.from(spec.pistons);
-    this.rLinearPhi = Float64Array.from(spec.restrictions, (r) => isoLinearRegionPhi(restrictions[r]!.criticalRatio, 0.5, LINEAR_EPSILON));
-    this.nodeBaseVolume = Float64Array.from(spec.freeNodes, (node) => nodes[node]!.volumeM3);
-    this.nodeExponent = Float64Array.from(spec.freeNodes, (node) => nodes[node]!.polytropicExponent ?? 1);
+    this.rLinearPhi = floats(spec.restrictions, (r) => isoLinearRegionPhi(restrictions[r]!.criticalRatio, 0.5, LINEAR_EPSILON));
+    this.nodeBaseVolume = floats(spec.freeNodes, (node) => nodes[node]!.volumeM3);
+    this.nodeExponent = floats(spec.freeNodes, (node) => nodes[node]!.polytropicExponent ?? 1);
     this.chamberStart = new Int32Array(spec.freeNodes.length + 1);
     const cPiston: number[] = [];
     const cArea: number[] = [];
@@ -836,7 +837,8 @@ export class Partition {
       if (p.rodNode !== null) pairs.push([v, local(p.rodNode)]);
     });
     const lu = new SparseLu(this.nState, pairs);
-    const diag = Int32Array.from({ length: this.nState }, (_, i) => lu.slot(i, i));
+    const diag = new Int32Array(this.nState);
+    for (let i = 0; i < this.nState; i += 1) diag[i] = lu.slot(i, i);
     const restriction = Int32Array.from(
       this.spec.restrictions.flatMap((_, j) => {
         const a = this.rowFrom[j]!;

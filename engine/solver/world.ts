@@ -1,6 +1,7 @@
 import { R_AIR_J_PER_KG_K } from '../calc/constants';
 import { chokedGain } from '../calc/iso6358';
 import type { SolverModel } from './model';
+import { flags, floats } from './typed-arrays';
 
 export type PistonMode = 'free' | 'stuck' | 'end-min' | 'end-max';
 
@@ -38,18 +39,18 @@ export class World {
     const nn = model.nodes.length;
     const nr = model.restrictions.length;
     const np = model.pistons.length;
-    this.pressure = Float64Array.from(model.nodes, (n) => (n.fixed ? n.fixedPressurePa : model.ambientPa));
+    this.pressure = floats(model.nodes, (n) => (n.fixed ? n.fixedPressurePa : model.ambientPa));
     this.volume = new Float64Array(nn);
     this.pressurePerMass = new Float64Array(nn);
-    this.fixedPressure = Float64Array.from(model.nodes, (n) => n.fixedPressurePa);
-    this.isFixed = Uint8Array.from(model.nodes, (n) => (n.fixed ? 1 : 0));
-    this.opening = Float64Array.from(model.restrictions, (r) => r.opening);
-    this.gain = Float64Array.from(model.restrictions, (r) => chokedGain(r.conductance, model.temperatureK));
+    this.fixedPressure = floats(model.nodes, (n) => n.fixedPressurePa);
+    this.isFixed = flags(model.nodes, (n) => n.fixed);
+    this.opening = floats(model.restrictions, (r) => r.opening);
+    this.gain = floats(model.restrictions, (r) => chokedGain(r.conductance, model.temperatureK));
     this.flow = new Float64Array(nr);
     this.dFlowA = new Float64Array(nr);
     this.dFlowB = new Float64Array(nr);
     this.dFlowC = new Float64Array(nr);
-    this.position = Float64Array.from(model.pistons, (p) => Math.min(Math.max(p.startPositionM, 0), p.strokeM));
+    this.position = floats(model.pistons, (p) => Math.min(Math.max(p.startPositionM, 0), p.strokeM));
     this.velocity = new Float64Array(np);
     this.mode = model.pistons.map((p, k) => (this.position[k]! <= 0 ? 'end-min' : this.position[k]! >= p.strokeM ? 'end-max' : 'stuck'));
     this.direction = new Float64Array(np);
