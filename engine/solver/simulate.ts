@@ -65,6 +65,11 @@ export function simulate(model: SolverModel, inputs: readonly InputEvent[], opti
 
 const ran = new WeakSet<SolverModel>();
 
+function includes(list: ArrayLike<number>, value: number): boolean {
+  for (let i = 0; i < list.length; i += 1) if (list[i] === value) return true;
+  return false;
+}
+
 /**
  * Partitions keep their own time. Discrete happenings — inputs, timers, guard
  * crossings — are handled one instant at a time, in time order, once every
@@ -103,9 +108,11 @@ class Run implements GuardSource, OutputRows {
   private currentBehaviour = -1;
   private readonly initialBudget: number;
   private readonly queue: TimeQueue;
-  /** Latest time each partition may step to: the earliest pending happening that touches it. */
+  /** Latest time each partition may step to: the earliest pending happening that touches it (the end of the pending rows aside). */
   private readonly cap: Float64Array;
-  private capsStale = true;
+  /** Partitions whose cap may have changed since it was last worked out. */
+  private readonly capDirty: Uint8Array;
+  private dirty: number[] = [];
   /** Partitions standing on a guard crossing not yet handled, and what each crossing touches. */
   private crossing: number[] = [];
   private readonly crossTouch: Array<readonly number[]>;
@@ -187,6 +194,7 @@ class Run implements GuardSource, OutputRows {
     });
     this.queue = new TimeQueue(this.partitions.length, (i) => this.partitions[i]!.time);
     this.cap = new Float64Array(this.partitions.length);
+    this.capDirty = new Uint8Array(this.partitions.length);
     this.crossTouch = this.partitions.map(() => []);
     this.inputTimes = this.partitions.map(() => new Float64Array(0));
     this.inputNext = new Int32Array(this.partitions.length);
@@ -270,6 +278,7 @@ class Run implements GuardSource, OutputRows {
     const sample = new Float64Array(names.length);
     this.assignColumns(names.length);
     this.indexInputs(inputs);
+    this.touchCaps(Int32Array.from(this.partitions.keys()));
     // t = 0: every partition stands on it.
     this.beginInstant(0);
     this.m.behaviours.forEach((_, i) => this.withBehaviour(i, (b) => b.start?.(this.api)));
@@ -286,13 +295,13 @@ class Run implements GuardSource, OutputRows {
 
     const partitions = this.partitions;
     for (;;) {
-      if (this.capsStale) this.refreshCaps();
+      if (this.dirty.length) this.refreshCaps();
       const next = this.nextInstant();
       const behind = this.queue.top();
       const p = partitions[behind];
       if (p && p.time < next - SAME_TIME_S) {
         p.snapshot();
-        p.advanceStep(this.cap[behind]!);
+        p.advanceStep(Math.min(this.cap[behind]!, this.lastRowTime()));
         this.queue.update(behind);
         if (p.crossed.length) this.crossingFound(behind);
         continue;
@@ -319,49 +328,71 @@ class Run implements GuardSource, OutputRows {
   }
 
   /** The earliest instant with something to handle: an input, a timer, a crossing, the end of the pending rows. */
+  /** The time of the last row the ring can hold (or the end of the run): no partition steps beyond it. */
+  private lastRowTime(): number {
+    return Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS);
+  }
+
   private nextInstant(): number {
-    let t = Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS);
+    let t = this.lastRowTime();
     if (this.inputCursor < this.inputs.length) t = Math.min(t, this.inputs[this.inputCursor]!.t);
     if (this.timers.length) t = Math.min(t, this.timers[0]!.t);
     for (const i of this.crossing) t = Math.min(t, this.partitions[i]!.time);
     return t;
   }
 
+  /** Marks partitions whose cap must be worked out again. */
+  private touchCaps(partitions: ArrayLike<number>): void {
+    for (let i = 0; i < partitions.length; i += 1) {
+      const p = partitions[i]!;
+      if (this.capDirty[p]) continue;
+      this.capDirty[p] = 1;
+      this.dirty.push(p);
+    }
+  }
+
   /**
-   * How far each partition may step: to the earliest pending input, timer or crossing that
-   * touches it, the end of the pending rows at most. A partition already beyond its limit
-   * (a new timer, a crossing just found) undoes its last step.
+   * How far each marked partition may step: to the earliest pending input, timer or crossing
+   * that touches it. A partition already beyond it (a new timer, a crossing just found) undoes
+   * its last step. Only partitions that a change touched are looked at, so the cost of an
+   * instant does not grow with the size of the circuit.
    */
   private refreshCaps(): void {
-    const cap = this.cap;
     const partitions = this.partitions;
-    for (;;) {
-      this.capsStale = false;
-      this.crossing = this.crossing.filter((i) => partitions[i]!.crossed.length > 0);
-      cap.fill(Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS));
-      // Inputs before the cursor are handled; those at the cursor's time are not.
-      const unhandled = this.inputCursor < this.inputs.length ? this.inputs[this.inputCursor]!.t : Infinity;
-      for (let p = 0; p < partitions.length; p += 1) {
+    this.crossing = this.crossing.filter((i) => partitions[i]!.crossed.length > 0);
+    // Inputs before the cursor are handled; those at the cursor's time are not.
+    const unhandled = this.inputCursor < this.inputs.length ? this.inputs[this.inputCursor]!.t : Infinity;
+    while (this.dirty.length) {
+      const list = this.dirty;
+      this.dirty = [];
+      for (const p of list) {
+        this.capDirty[p] = 0;
+        let cap = Infinity;
         const times = this.inputTimes[p]!;
         let next = this.inputNext[p]!;
         while (next < times.length && times[next]! < unhandled - SAME_TIME_S) next += 1;
         this.inputNext[p] = next;
-        if (next < times.length && times[next]! < cap[p]!) cap[p] = times[next]!;
-      }
-      for (const timer of this.timers) for (const p of this.touchOf[timer.behaviour]!) if (timer.t < cap[p]!) cap[p] = timer.t;
-      for (const i of this.crossing) {
-        const t = partitions[i]!.time;
-        for (const p of this.crossTouch[i]!) if (t < cap[p]!) cap[p] = t;
-      }
-      let undone = false;
-      for (let p = 0; p < partitions.length; p += 1) {
-        if (partitions[p]!.time > cap[p]! + SAME_TIME_S && partitions[p]!.canUndo()) {
-          partitions[p]!.restore();
+        if (next < times.length) cap = times[next]!;
+        for (const timer of this.timers) {
+          if (timer.t >= cap) break;
+          if (includes(this.touchOf[timer.behaviour]!, p)) cap = timer.t;
+        }
+        for (const i of this.crossing) {
+          const t = partitions[i]!.time;
+          if (t < cap && includes(this.crossTouch[i]!, p)) cap = t;
+        }
+        this.cap[p] = cap;
+        const partition = partitions[p]!;
+        if (partition.time > cap + SAME_TIME_S && partition.canUndo()) {
+          const hadCrossing = partition.crossed.length > 0;
+          partition.restore();
           this.queue.update(p);
-          undone = true;
+          if (hadCrossing) {
+            this.crossing = this.crossing.filter((i) => partitions[i]!.crossed.length > 0);
+            this.touchCaps(this.crossTouch[p]!);
+          }
         }
       }
-      if (!undone) return;
     }
   }
 
@@ -375,7 +406,7 @@ class Run implements GuardSource, OutputRows {
     }
     this.crossTouch[index] = [...touched];
     this.crossing.push(index);
-    this.capsStale = true;
+    this.touchCaps(this.crossTouch[index]!);
   }
 
   /**
@@ -387,7 +418,12 @@ class Run implements GuardSource, OutputRows {
     this.flushRows(t, false);
     this.beginInstant(t);
     this.fireCrossings();
-    while (this.inputCursor < this.inputs.length && this.inputs[this.inputCursor]!.t <= t + SAME_TIME_S) this.applyInput(this.inputs[this.inputCursor++]!);
+    while (this.inputCursor < this.inputs.length && this.inputs[this.inputCursor]!.t <= t + SAME_TIME_S) {
+      const input = this.inputs[this.inputCursor++]!;
+      const b = this.m.componentIds.get(input.component);
+      if (b !== undefined) this.touchCaps(this.touchOf[b]!);
+      this.applyInput(input);
+    }
     this.fireDueTimers(t);
     this.settle();
     if (t >= this.untilS - SAME_TIME_S) {
@@ -402,7 +438,6 @@ class Run implements GuardSource, OutputRows {
       }
     }
     this.endInstant();
-    this.capsStale = true;
   }
 
   private fireDueTimers(t: number): void {
@@ -411,6 +446,7 @@ class Run implements GuardSource, OutputRows {
       // they are brought back to it first, and the instant is handled again.
       if (!this.touchStands(this.timers[0]!.behaviour)) return;
       const timer = this.timers.shift()!;
+      this.touchCaps(this.touchOf[timer.behaviour]!);
       if (timer.command) {
         const command = timer.command;
         this.withBehaviour(timer.behaviour, (b) => b.onInput?.(command, this.api));
@@ -456,6 +492,7 @@ class Run implements GuardSource, OutputRows {
       const values = p.guardValues;
       const owners = p.guardOwners;
       p.crossed = [];
+      if (this.crossing.includes(i)) this.touchCaps(this.crossTouch[i]!);
       p.dirty = true;
       for (const index of crossed) {
         if (index < p.pistonGuardCount) this.firePistonGuard(p.spec.pistons[Math.floor(index / 3)]!, index % 3);
@@ -601,7 +638,7 @@ class Run implements GuardSource, OutputRows {
     const at = this.timers.findIndex((x) => x.t > timer.t);
     if (at < 0) this.timers.push(timer);
     else this.timers.splice(at, 0, timer);
-    this.capsStale = true;
+    this.touchCaps(this.touchOf[timer.behaviour]!);
   }
 
   private makeApi(): RuntimeApi {
@@ -651,7 +688,10 @@ class Run implements GuardSource, OutputRows {
       },
       cancel: (tag: string) => {
         for (let i = this.timers.length - 1; i >= 0; i -= 1) {
-          if (this.timers[i]!.behaviour === this.currentBehaviour && !this.timers[i]!.command && this.timers[i]!.tag === tag) this.timers.splice(i, 1);
+          if (this.timers[i]!.behaviour === this.currentBehaviour && !this.timers[i]!.command && this.timers[i]!.tag === tag) {
+            this.touchCaps(this.touchOf[this.currentBehaviour]!);
+            this.timers.splice(i, 1);
+          }
         }
       },
       event: (kind: string, detail?: string) => this.emit(this.m.behaviours[this.currentBehaviour]?.componentId ?? '', kind, detail),

@@ -74,7 +74,11 @@ export class MemoryTraceSink implements TraceSink {
     const rows = this.time.length;
     const signals: TraceSignal[] = this.names.map((s, i) => {
       const values = new Array<number>(rows);
-      for (let k = 0; k < rows; k += 1) values[k] = this.blocks[Math.floor(k / ROWS_PER_BLOCK)]![(k % ROWS_PER_BLOCK) * width + i]!;
+      let k = 0;
+      for (const block of this.blocks) {
+        const end = Math.min(rows, k + ROWS_PER_BLOCK);
+        for (let at = i; k < end; k += 1, at += width) values[k] = block[at]!;
+      }
       return { name: s.name, unit: s.unit, values };
     });
     return { formatVersion: TRACE_FORMAT_VERSION, intervalS, time: this.time, signals, events: this.events, stats };
