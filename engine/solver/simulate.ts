@@ -34,9 +34,12 @@ export interface SimulationOptions {
 /**
  * Output rows kept pending. Partitions step past output times and fill their
  * columns by interpolation; a row goes to the sink once every partition has
- * passed it. No partition steps beyond the last pending row.
+ * passed it. Partitions land on every epoch boundary (EPOCH_ROWS output
+ * intervals apart) and are never more than one epoch ahead of the oldest
+ * pending row, so two epochs' rows are enough.
  */
-const PENDING_ROWS = 128;
+const EPOCH_ROWS = 64;
+const PENDING_ROWS = 2 * EPOCH_ROWS;
 
 /** Times closer than this are the same instant, s. */
 const SAME_TIME_S = 1e-12;
@@ -301,7 +304,7 @@ class Run implements GuardSource, OutputRows {
       const p = partitions[behind];
       if (p && p.time < next - SAME_TIME_S) {
         p.snapshot();
-        p.advanceStep(Math.min(this.cap[behind]!, this.lastRowTime()));
+        p.advanceStep(Math.min(this.cap[behind]!, this.epochEnd(p.time)));
         this.queue.update(behind);
         if (p.crossed.length) this.crossingFound(behind);
         continue;
@@ -328,13 +331,19 @@ class Run implements GuardSource, OutputRows {
   }
 
   /** The earliest instant with something to handle: an input, a timer, a crossing, the end of the pending rows. */
-  /** The time of the last row the ring can hold (or the end of the run): no partition steps beyond it. */
-  private lastRowTime(): number {
-    return Math.min((this.firstPending + PENDING_ROWS - 1) * this.intervalS, this.untilS);
+  /**
+   * The end of the epoch a partition is in: epochs are EPOCH_ROWS output intervals long, fixed in
+   * time. Every partition lands on every epoch boundary whatever the others do, so its steps are
+   * its own; and since a partition only steps while it is the one furthest behind, none is ever
+   * more than an epoch ahead of the oldest row not yet sent.
+   */
+  private epochEnd(time: number): number {
+    return Math.min((Math.floor(time / (EPOCH_ROWS * this.intervalS) + 1e-9) + 1) * EPOCH_ROWS * this.intervalS, this.untilS);
   }
 
   private nextInstant(): number {
-    let t = this.lastRowTime();
+    // The next epoch boundary is an instant: its rows are sent there.
+    let t = Math.min(Math.ceil(this.firstPending / EPOCH_ROWS) * EPOCH_ROWS * this.intervalS, this.untilS);
     if (this.inputCursor < this.inputs.length) t = Math.min(t, this.inputs[this.inputCursor]!.t);
     if (this.timers.length) t = Math.min(t, this.timers[0]!.t);
     for (const i of this.crossing) t = Math.min(t, this.partitions[i]!.time);
