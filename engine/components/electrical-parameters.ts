@@ -1,4 +1,4 @@
-import type { ParameterSpec, PortSpec } from './types';
+import type { InputCommand, ParameterSpec, PortSpec } from './types';
 
 /**
  * Parameter specs and terminal sets shared by the electrical component types.
@@ -17,25 +17,23 @@ export const coilTagParam: ParameterSpec = {
   description: 'Tag of the relay, timer relay or counter whose coil switches this contact.',
 };
 
-export const pickUpParam = (defaultS: number, label = 'Pick-up time'): ParameterSpec => ({
-  kind: 'number',
-  quantity: 'time',
-  label,
-  default: defaultS,
-  min: 0,
-  max: 600,
-  description: 'Delay from the coil being energised to its contacts switching.',
-});
+const delayParam = (label: string, defaultS: number, description: string): ParameterSpec => ({ kind: 'number', quantity: 'time', label, default: defaultS, min: 0, max: 600, description });
 
-export const dropOutParam = (defaultS: number, label = 'Drop-out time'): ParameterSpec => ({
-  kind: 'number',
-  quantity: 'time',
-  label,
-  default: defaultS,
-  min: 0,
-  max: 600,
-  description: 'Delay from the coil losing power to its contacts returning.',
-});
+export const pickUpParam = (defaultS: number, label = 'Pick-up time'): ParameterSpec =>
+  delayParam(label, defaultS, 'Delay from the coil being energised to its contacts switching.');
+
+export const dropOutParam = (defaultS: number, label = 'Drop-out time'): ParameterSpec =>
+  delayParam(label, defaultS, 'Delay from the coil losing power to its contacts returning.');
+
+/**
+ * A load's new state from the control network's `set` input (value 1 energised, 0 not);
+ * null when the input is something else or changes nothing.
+ */
+export function switchedLoad(command: InputCommand, energised: boolean): boolean | null {
+  if (command.action !== 'set') return null;
+  const now = (command.value ?? 0) > 0;
+  return now === energised ? null : now;
+}
 
 /** Half-length of the stretch of stroke over which a position switch or sensor is actuated, and its release margin. */
 export const windowParam = (defaultM: number): ParameterSpec => ({

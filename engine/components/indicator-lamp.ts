@@ -1,4 +1,4 @@
-import { terminals } from './electrical-parameters';
+import { switchedLoad, terminals } from './electrical-parameters';
 import type { ComponentType } from './types';
 
 export const indicatorLamp: ComponentType = {
@@ -15,8 +15,9 @@ export const indicatorLamp: ComponentType = {
     let lit = false;
     return {
       onInput(command, api) {
-        if (command.action !== 'set' || lit === (command.value ?? 0) > 0) return;
-        lit = !lit;
+        const now = switchedLoad(command, lit);
+        if (now === null) return;
+        lit = now;
         api.event(lit ? 'lit' : 'dark');
       },
       signals() {

@@ -36,7 +36,7 @@ export function manualContact(def: { id: string; label: string; description: str
           if (now === operated) return;
           operated = now;
           if (def.operation === 'emergency-stop') api.event(operated ? 'struck' : 'reset');
-          control.setContact(contact, def.normallyClosed ? !operated : operated, api);
+          control.setContacts([[contact, def.normallyClosed ? !operated : operated]], api);
         },
         signals() {
           return { operated: operated ? 1 : 0, closed: control.contactClosed(contact) ? 1 : 0 };

@@ -1,5 +1,5 @@
 import { hysteresisParam, terminals, windowParam } from './electrical-parameters';
-import type { ComponentType } from './types';
+import type { ComponentType, RuntimeApi } from './types';
 
 /**
  * A switch actuated by a cylinder at a stroke position (an actuation link from the
@@ -27,19 +27,15 @@ export function positionSwitch(def: { id: string; label: string; description: st
         def.kind === 'changeover'
           ? [control.addContact(ctx.terminal('11'), ctx.terminal('12'), true, ctx.componentId), control.addContact(ctx.terminal('11'), ctx.terminal('14'), false, ctx.componentId)]
           : [control.addContact(ctx.terminal('BN'), ctx.terminal('BK'), false, ctx.componentId)];
-      ctx.terminal(def.kind === 'sensor' ? 'BU' : '11');
       let actuated = false;
       const reach = () => (actuated ? window + hysteresis : window);
-      const apply = (api: Parameters<NonNullable<ReturnType<ComponentType['build']>['onGuard']>>[2], now: boolean) => {
+      const apply = (api: RuntimeApi, now: boolean) => {
         if (now === actuated) return;
         actuated = now;
         api.event(actuated ? 'actuated' : 'released');
-        if (def.kind === 'changeover') {
-          control.setContact(contacts[0]!, !actuated, api);
-          control.setContact(contacts[1]!, actuated, api);
-        } else control.setContact(contacts[0]!, actuated, api);
+        control.setContacts(def.kind === 'changeover' ? [[contacts[0]!, !actuated], [contacts[1]!, actuated]] : [[contacts[0]!, actuated]], api);
       };
-      const inside = (api: Parameters<typeof apply>[0]) => links.some((l) => Math.abs(api.position(l.piston) - l.positionM) <= reach());
+      const inside = (api: RuntimeApi) => links.some((l) => Math.abs(api.position(l.piston) - l.positionM) <= reach());
       return {
         guards(api) {
           const out: number[] = [];

@@ -28,8 +28,7 @@ export const pressureSwitch: ComponentType = {
       if (now === operated) return;
       operated = now;
       api.event(operated ? 'operated' : 'released');
-      control.setContact(nc, !operated, api);
-      control.setContact(no, operated, api);
+      control.setContacts([[nc, !operated], [no, operated]], api);
     };
     return {
       guards: (api) => [margin(api)],

@@ -1,4 +1,4 @@
-import { coilTagParam, terminals } from './electrical-parameters';
+import { coilTagParam, switchedLoad, terminals } from './electrical-parameters';
 import type { ComponentType, ParameterSpec } from './types';
 
 /**
@@ -28,9 +28,8 @@ export function relayCoilType(def: { id: string; label: string; description: str
       let operated = false;
       return {
         onInput(command, api) {
-          if (command.action !== 'set') return;
-          const now = (command.value ?? 0) > 0;
-          if (now === energised) return;
+          const now = switchedLoad(command, energised);
+          if (now === null) return;
           energised = now;
           api.event(energised ? 'energised' : 'de-energised');
           api.cancel('operate');

@@ -1,4 +1,4 @@
-import { terminals } from './electrical-parameters';
+import { switchedLoad, terminals } from './electrical-parameters';
 import type { ComponentType } from './types';
 
 /**
@@ -26,9 +26,8 @@ export const solenoidCoil: ComponentType = {
     let energised = false;
     return {
       onInput(command, api) {
-        if (command.action !== 'set') return;
-        const now = (command.value ?? 0) > 0;
-        if (now === energised) return;
+        const now = switchedLoad(command, energised);
+        if (now === null) return;
         energised = now;
         api.event(energised ? 'energised' : 'de-energised');
         api.send(valve, { action: 'set', parameter: side, value: energised ? 1 : 0 });

@@ -202,8 +202,9 @@ export interface ControlNetwork {
   /** A one-way element (a diode), conducting from anode to cathode only. */
   addDiode(anode: number, cathode: number, owner: string): void;
   /** A load between two nets (coil, lamp); `owner` gets `set` inputs (value 1 or 0) as it is energised or not. */
-  addLoad(a: number, b: number, owner: string, name?: string): number;
-  setContact(contact: number, closed: boolean, api: RuntimeApi): void;
+  addLoad(a: number, b: number, owner: string, name?: string): void;
+  /** Switches contacts together (a changeover), then settles the network once. */
+  setContacts(changes: ReadonlyArray<readonly [contact: number, closed: boolean]>, api: RuntimeApi): void;
   /** Switches every contact that follows `coil`: normally-open ones close when `operated`. */
   operateContacts(coil: string, operated: boolean, api: RuntimeApi): void;
   contactClosed(contact: number): boolean;

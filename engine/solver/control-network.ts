@@ -85,20 +85,24 @@ export class ControlCircuit implements ControlNetwork {
     this.elements.push({ kind: 'diode', a: anode, b: cathode, closed: true, owner, normallyClosed: true });
   }
 
-  addLoad(a: number, b: number, owner: string, name?: string): number {
+  addLoad(a: number, b: number, owner: string, name?: string): void {
     this.loads.push({ a, b, owner, ...(name ? { name } : {}), energised: false, toggles: [], chatterReported: false });
-    return this.loads.length - 1;
   }
 
   contactClosed(contact: number): boolean {
     return this.elements[contact]!.closed;
   }
 
-  setContact(contact: number, closed: boolean, api: RuntimeApi): void {
-    if (this.elements[contact]!.closed === closed) return;
-    this.elements[contact]!.closed = closed;
-    this.changed.push(this.elements[contact]!.owner);
-    this.settle(api);
+  setContacts(changes: ReadonlyArray<readonly [contact: number, closed: boolean]>, api: RuntimeApi): void {
+    let changed = false;
+    for (const [contact, closed] of changes) {
+      const e = this.elements[contact]!;
+      if (e.closed === closed) continue;
+      e.closed = closed;
+      this.changed.push(e.owner);
+      changed = true;
+    }
+    if (changed) this.settle(api);
   }
 
   operateContacts(coil: string, operated: boolean, api: RuntimeApi): void {

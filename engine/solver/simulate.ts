@@ -168,7 +168,8 @@ class Run implements GuardSource, OutputRows {
       for (const k of spec.pistons) this.partitionOfPiston[k] = i;
       for (const node of spec.freeNodes) this.partitionOfFreeNode[node] = i;
       for (const node of new Set([...spec.fixedNodes, ...spec.watchedBoundaries])) {
-        this.partitionsOfFixedNode.set(node, [...(this.partitionsOfFixedNode.get(node) ?? []), i]);
+        if (!this.partitionsOfFixedNode.has(node)) this.partitionsOfFixedNode.set(node, []);
+        this.partitionsOfFixedNode.get(node)!.push(i);
       }
     });
     const owned = new Map<string, Set<number>>();
@@ -435,10 +436,9 @@ class Run implements GuardSource, OutputRows {
     }
     this.fireDueTimers(t);
     this.settle();
-    if (t >= this.untilS - SAME_TIME_S) {
-      for (const p of this.partitions) p.ensureFresh();
-      if (this.firstPending * this.intervalS >= this.untilS - SAME_TIME_S || Math.abs(this.firstPending * this.intervalS - t) <= SAME_TIME_S) this.record(sample);
-    } else {
+    // Every partition stands on the end of the run: its last row comes from the world.
+    if (t >= this.untilS - SAME_TIME_S) this.record(sample);
+    else {
       const k = this.firstPending;
       if (Math.abs(k * this.intervalS - t) <= SAME_TIME_S) {
         // The row at this instant shows the state after what happened at it.
@@ -465,13 +465,19 @@ class Run implements GuardSource, OutputRows {
 
   /** Every partition the behaviour touches stands on the instant (or is past it for good: a step that can no longer be undone). */
   private touchStands(behaviour: number): boolean {
-    for (const p of this.touchOf[behaviour]!) {
-      if (this.synced[p]) continue;
-      const partition = this.partitions[p]!;
-      if (partition.time > this.time + SAME_TIME_S && !partition.canUndo()) continue;
-      return false;
-    }
+    for (const p of this.touchOf[behaviour]!) if (!this.standsHere(p)) return false;
     return true;
+  }
+
+  /**
+   * The partition stands on the instant being handled — or is past it by a step that can no
+   * longer be undone (a crossing found while re-running a step, rare), and then acts from
+   * where it stands.
+   */
+  private standsHere(p: number): boolean {
+    if (this.synced[p]) return true;
+    const partition = this.partitions[p]!;
+    return partition.time > this.time + SAME_TIME_S && !partition.canUndo();
   }
 
   private beginInstant(t: number): void {
@@ -623,12 +629,9 @@ class Run implements GuardSource, OutputRows {
    * (its touch set). Anything else is a fault in the touch sets, not in the user's circuit.
    */
   private mustStandHere(partition: number): void {
-    if (partition < 0 || this.synced[partition]) return;
-    const late = this.partitions[partition]!;
-    // Past the instant by a step that can no longer be undone (a crossing found while re-running a
-    // step, rare): it acts from where it stands, as touchStands() allowed.
-    if (late.time > this.time + SAME_TIME_S && !late.canUndo()) {
-      late.ensureFresh();
+    if (partition < 0) return;
+    if (this.standsHere(partition)) {
+      this.partitions[partition]!.ensureFresh();
       return;
     }
     throw new Error(`internal: ${this.m.behaviours[this.currentBehaviour]?.tag ?? 'a behaviour'} acted on a partition that is not at t = ${this.time} s`);
