@@ -155,15 +155,27 @@ export function pressFor(component: string, t: number, hold: number, parameter?:
  * to join and must tube them together.
  */
 export function cylinderRig(options: {
+  valve?: Record<string, number | string | boolean>;
   cylinder?: Record<string, number | string | boolean>;
   lineA?: (c: TestCircuit, valvePort: string, cylinderPort: string) => TestCircuit;
   lineB?: (c: TestCircuit, valvePort: string, cylinderPort: string) => TestCircuit;
 } = {}): TestCircuit {
   const direct = (c: TestCircuit, a: string, b: string) => c.tube(a, b);
-  let c = withSupply(6).add('v', 'valve-5-2').add('cyl', 'cylinder-double-acting', options.cylinder ?? {}).tube('sup:2', 'v:1');
+  let c = withSupply(6).add('v', 'valve-5-2', options.valve ?? {}).add('cyl', 'cylinder-double-acting', options.cylinder ?? {}).tube('sup:2', 'v:1');
   c = (options.lineA ?? direct)(c, 'v:4', 'cyl:A');
   c = (options.lineB ?? direct)(c, 'v:2', 'cyl:B');
   return c;
+}
+
+/** A meter-out line: the valve port through one-way flow control `id` (free flow 1→2) to the cylinder port. */
+export const meterOut =
+  (id: string, opening: number) =>
+  (c: TestCircuit, valvePort: string, cylinderPort: string): TestCircuit =>
+    c.add(id, 'one-way-flow-control', { opening }).tube(valvePort, `${id}:1`).tube(`${id}:2`, cylinderPort);
+
+/** Adds indicator lamp `id` from `terminal` to the control supply's 0 V (`ps:M`): lit while `terminal` is live. */
+export function lamp(c: TestCircuit, id: string, terminal: string): TestCircuit {
+  return c.add(id, 'indicator-lamp').wire(terminal, `${id}:X1`).wire(`${id}:X2`, 'ps:M');
 }
 
 // ---- directional valve port tables ------------------------------------------------------

@@ -1,52 +1,40 @@
 import { describe, expect, it } from 'vitest';
-import { compile } from '@/engine/solver/compile';
-import { simulate, type InputEvent } from '@/engine/solver/simulate';
+import type { InputEvent } from '@/engine/solver/simulate';
 import { signal, type Trace } from '@/engine/trace/trace';
+import { cylinderRig, eventsOf, lamp, meterOut, runCircuit, valueAt as at } from '../components/harness';
 import { TestCircuit } from '../support/circuit';
 
-function run(circuit: TestCircuit, inputs: InputEvent[], untilS: number, intervalS = 0.001): Trace {
-  const { model, diagnostics } = compile(circuit.build());
-  if (!model) throw new Error(diagnostics.map((d) => d.message).join('; '));
-  return simulate(model, inputs, { untilS, intervalS });
-}
-
-/** The value of a signal at time t (the last sample at or before it). */
-function at(trace: Trace, name: string, t: number): number {
-  const s = signal(trace, name);
-  if (!s) throw new Error(`no signal ${name}`);
-  let k = 0;
-  while (k + 1 < trace.time.length && trace.time[k + 1]! <= t + 1e-9) k += 1;
-  return s.values[k]!;
-}
+const run = (circuit: TestCircuit, inputs: InputEvent[], untilS: number, intervalS = 0.001): Trace => runCircuit(circuit.build(), inputs, untilS, intervalS);
 
 const press = (t: number, component: string): InputEvent => ({ t, component, action: 'press' });
 const release = (t: number, component: string): InputEvent => ({ t, component, action: 'release' });
 
+const SOLENOID_SPRING = { actuation: 'solenoid', returnBy: 'spring' };
+const SMALL_CYLINDER = { bore: 0.032, rod: 0.012, stroke: 0.05 };
+
 /**
- * Start S1 (NO) in parallel with K1's own NO contact, in series with stop S0 (NC), feeding K1:
- * the self-holding (latching) rung of every machine control panel (common practice).
+ * Adds the control supply and, on it, start S1 (NO) in parallel with K1's own NO contact K1a, in
+ * series with stop S0 (NC, of type `stop`), feeding K1: the self-holding (latching) rung of every
+ * machine control panel (common practice).
  */
-function selfHolding(): TestCircuit {
-  return new TestCircuit()
+function selfHolding(c = new TestCircuit(), stop = 'pushbutton-nc'): TestCircuit {
+  return c
     .add('ps', 'dc-supply', {}, 'G1')
-    .add('S0', 'pushbutton-nc')
+    .add('S0', stop)
     .add('S1', 'pushbutton-no')
     .add('K1', 'relay-coil')
     .add('K1a', 'relay-contact-no', { coil: 'K1' })
-    .add('H1', 'indicator-lamp')
     .wire('ps:L+', 'S0:11')
     .wire('S0:12', 'S1:13')
     .wire('S0:12', 'K1a:13')
     .wire('S1:14', 'K1:A1')
     .wire('K1a:14', 'K1:A1')
-    .wire('K1:A2', 'ps:M')
-    .wire('K1:A1', 'H1:X1')
-    .wire('H1:X2', 'ps:M');
+    .wire('K1:A2', 'ps:M');
 }
 
 describe('control circuit co-simulation', () => {
   it('self-holding: start latches K1, stop drops it, and stop wins when both are pressed (stop-dominant, common practice)', () => {
-    const trace = run(selfHolding(), [press(0.1, 'S1'), release(0.2, 'S1'), press(0.5, 'S0'), release(0.6, 'S0'), press(0.8, 'S1'), press(0.8, 'S0'), release(0.9, 'S1'), release(1.0, 'S0')], 1.2);
+    const trace = run(lamp(selfHolding(), 'H1', 'K1:A1'), [press(0.1, 'S1'), release(0.2, 'S1'), press(0.5, 'S0'), release(0.6, 'S0'), press(0.8, 'S1'), press(0.8, 'S0'), release(0.9, 'S1'), release(1.0, 'S0')], 1.2);
     expect(at(trace, 'K1:operated', 0.09)).toBe(0);
     // Pick-up 10 ms: operated by 0.12 s, and still held after the start button is released.
     expect(at(trace, 'K1:operated', 0.12)).toBe(1);
@@ -63,17 +51,11 @@ describe('control circuit co-simulation', () => {
   });
 
   it('two-hand start in series: the solenoid is energised only while both buttons are pressed', () => {
-    const circuit = new TestCircuit()
+    const circuit = cylinderRig({ valve: SOLENOID_SPRING, cylinder: SMALL_CYLINDER })
       .add('ps', 'dc-supply', {}, 'G1')
       .add('S1', 'pushbutton-no')
       .add('S2', 'pushbutton-no')
-      .add('M1', 'solenoid-coil', { valve: '1V1', side: '14' }, '1M1')
-      .add('src', 'air-supply', { pressure: 600_000 })
-      .add('v', 'valve-5-2', { actuation: 'solenoid', returnBy: 'spring' }, '1V1')
-      .add('cyl', 'cylinder-double-acting', { bore: 0.032, rod: 0.012, stroke: 0.05 })
-      .tube('src:2', 'v:1')
-      .tube('v:4', 'cyl:A')
-      .tube('v:2', 'cyl:B')
+      .add('M1', 'solenoid-coil', { valve: 'v', side: '14' }, '1M1')
       .wire('ps:L+', 'S1:13')
       .wire('S1:14', 'S2:13')
       .wire('S2:14', 'M1:A1')
@@ -84,7 +66,7 @@ describe('control circuit co-simulation', () => {
     // The valve follows its coil after its 15 ms switching time, and the cylinder extends.
     expect(at(trace, 'v:position', 0.31)).toBe(1);
     expect(at(trace, 'v:position', 0.32)).toBe(0);
-    expect(trace.events.some((e) => e.componentId === 'cyl' && e.kind === 'end-position' && e.detail === 'extended')).toBe(true);
+    expect(eventsOf(trace, 'cyl', 'end-position', 'extended')).not.toHaveLength(0);
   });
 
   it('on-delay and off-delay timer relays switch at their set times, within one output interval', () => {
@@ -95,21 +77,15 @@ describe('control circuit co-simulation', () => {
       .add('KT2', 'timer-relay-off-delay', { dropOutTime: 0.4 })
       .add('KT1a', 'relay-contact-no', { coil: 'KT1' })
       .add('KT2a', 'relay-contact-no', { coil: 'KT2' })
-      .add('H1', 'indicator-lamp')
-      .add('H2', 'indicator-lamp')
       .wire('ps:L+', 'S1:13')
       .wire('S1:14', 'KT1:A1')
       .wire('S1:14', 'KT2:A1')
       .wire('KT1:A2', 'ps:M')
       .wire('KT2:A2', 'ps:M')
       .wire('ps:L+', 'KT1a:13')
-      .wire('KT1a:14', 'H1:X1')
-      .wire('ps:L+', 'KT2a:13')
-      .wire('KT2a:14', 'H2:X1')
-      .wire('H1:X2', 'ps:M')
-      .wire('H2:X2', 'ps:M');
+      .wire('ps:L+', 'KT2a:13');
     const interval = 0.01;
-    const trace = run(circuit, [{ t: 0.1, component: 'S1', action: 'toggle' }, { t: 1.0, component: 'S1', action: 'toggle' }], 2, interval);
+    const trace = run(lamp(lamp(circuit, 'H1', 'KT1a:14'), 'H2', 'KT2a:14'), [{ t: 0.1, component: 'S1', action: 'toggle' }, { t: 1.0, component: 'S1', action: 'toggle' }], 2, interval);
     const edge = (name: string, from: number) => trace.time.find((t, k) => k > 0 && t >= from && signal(trace, name)!.values[k] !== signal(trace, name)!.values[k - 1])!;
     // On-delay: lit 0.25 s after the switch closes; dark at once when it opens.
     expect(Math.abs(edge('H1:lit', 0) - 0.35)).toBeLessThanOrEqual(interval);
@@ -117,20 +93,14 @@ describe('control circuit co-simulation', () => {
     // Off-delay: lit at once; dark 0.4 s after the switch opens.
     expect(Math.abs(edge('H2:lit', 0) - 0.1)).toBeLessThanOrEqual(interval);
     expect(Math.abs(edge('H2:lit', 0.5) - 1.4)).toBeLessThanOrEqual(interval);
-    const at1 = trace.events.find((e) => e.componentId === 'KT1' && e.kind === 'contacts-operated')!.t;
-    const at2 = trace.events.find((e) => e.componentId === 'KT2' && e.kind === 'contacts-returned')!.t;
+    const at1 = eventsOf(trace, 'KT1', 'contacts-operated')[0]!.t;
+    const at2 = eventsOf(trace, 'KT2', 'contacts-returned')[0]!.t;
     expect(at1).toBeCloseTo(0.35, 9);
     expect(at2).toBeCloseTo(1.4, 9);
   });
 
   it('a reciprocating cylinder with a single-solenoid 5/2 valve, two sensors and a counter runs three cycles and stops', () => {
-    const circuit = new TestCircuit()
-      .add('src', 'air-supply', { pressure: 600_000 })
-      .add('v', 'valve-5-2', { actuation: 'solenoid', returnBy: 'spring' }, '1V1')
-      .add('cyl', 'cylinder-double-acting', { bore: 0.032, rod: 0.012, stroke: 0.05 }, '1A1')
-      .tube('src:2', 'v:1')
-      .tube('v:4', 'cyl:A')
-      .tube('v:2', 'cyl:B')
+    const circuit = cylinderRig({ valve: SOLENOID_SPRING, cylinder: SMALL_CYLINDER })
       .add('B1', 'proximity-sensor-reed', {}, '1B1')
       .add('B2', 'proximity-sensor-reed', {}, '1B2')
       .link('cyl', 'B1', 0)
@@ -147,7 +117,7 @@ describe('control circuit co-simulation', () => {
       .add('K2b', 'relay-contact-no', { coil: 'K2' })
       .add('K3', 'relay-coil')
       .add('K3a', 'relay-contact-nc', { coil: 'K3' })
-      .add('M1', 'solenoid-coil', { valve: '1V1', side: '14' }, '1M1')
+      .add('M1', 'solenoid-coil', { valve: 'v', side: '14' }, '1M1')
       // Rung 1: the counter's NC contact, then start or K1's hold, into K1.
       .wire('ps:L+', 'C1a:21')
       .wire('C1a:22', 'S1:13')
@@ -176,9 +146,9 @@ describe('control circuit co-simulation', () => {
       .wire('K2b:14', 'M1:A1')
       .wire('M1:A2', 'ps:M');
     const trace = run(circuit, [press(0.1, 'S1'), release(0.3, 'S1')], 6, 0.005);
-    const ends = trace.events.filter((e) => e.componentId === 'cyl' && e.kind === 'end-position').map((e) => e.detail);
+    const ends = eventsOf(trace, 'cyl', 'end-position').map((e) => e.detail);
     expect(ends).toEqual(['extended', 'retracted', 'extended', 'retracted', 'extended', 'retracted']);
-    expect(trace.events.filter((e) => e.componentId === 'C1' && e.kind === 'counted').map((e) => e.detail)).toEqual(['1', '2', '3']);
+    expect(eventsOf(trace, 'C1', 'counted').map((e) => e.detail)).toEqual(['1', '2', '3']);
     // Stopped: K1 dropped at the preset and the cylinder rests retracted to the end.
     expect(at(trace, 'K1:operated', 5.9)).toBe(0);
     expect(at(trace, 'cyl:x', 5.9)).toBe(0);
@@ -186,28 +156,10 @@ describe('control circuit co-simulation', () => {
   });
 
   it('an emergency stop de-energises every coil; the valve returns to its spring position and the cylinder retracts', () => {
-    const circuit = new TestCircuit()
-      .add('src', 'air-supply', { pressure: 600_000 })
-      .add('v', 'valve-5-2', { actuation: 'solenoid', returnBy: 'spring' }, '1V1')
-      .add('cyl', 'cylinder-double-acting', { bore: 0.032, rod: 0.012, stroke: 0.2 }, '1A1')
-      .add('fc', 'one-way-flow-control', { opening: 0.15 })
-      .tube('src:2', 'v:1')
-      .tube('v:4', 'cyl:A')
-      .tube('v:2', 'fc:1')
-      .tube('fc:2', 'cyl:B')
-      .add('ps', 'dc-supply', {}, 'G1')
-      .add('S0', 'emergency-stop')
-      .add('S1', 'pushbutton-no')
-      .add('K1', 'relay-coil')
-      .add('K1a', 'relay-contact-no', { coil: 'K1' })
+    const rig = cylinderRig({ valve: SOLENOID_SPRING, cylinder: { ...SMALL_CYLINDER, stroke: 0.2 }, lineB: meterOut('fc', 0.15) });
+    const circuit = selfHolding(rig, 'emergency-stop')
       .add('K1b', 'relay-contact-no', { coil: 'K1' })
-      .add('M1', 'solenoid-coil', { valve: '1V1', side: '14' }, '1M1')
-      .wire('ps:L+', 'S0:11')
-      .wire('S0:12', 'S1:13')
-      .wire('S0:12', 'K1a:13')
-      .wire('S1:14', 'K1:A1')
-      .wire('K1a:14', 'K1:A1')
-      .wire('K1:A2', 'ps:M')
+      .add('M1', 'solenoid-coil', { valve: 'v', side: '14' }, '1M1')
       .wire('S0:12', 'K1b:13')
       .wire('K1b:14', 'M1:A1')
       .wire('M1:A2', 'ps:M');
@@ -257,7 +209,7 @@ describe('control circuit co-simulation', () => {
     expect(chatter[0]!.detail).toContain('K1');
     expect(chatter[0]!.detail).toContain('K1a');
     // 10 ms in, 5 ms out: one cycle every 15 ms, so some 130 pick-ups in 2 s.
-    const operations = trace.events.filter((e) => e.componentId === 'K1' && e.kind === 'contacts-operated').length;
+    const operations = eventsOf(trace, 'K1', 'contacts-operated').length;
     expect(operations).toBeGreaterThan(120);
     expect(operations).toBeLessThan(140);
   });
@@ -269,18 +221,15 @@ describe('control circuit co-simulation', () => {
       .add('S2', 'pushbutton-no')
       .add('C1', 'counter', { preset: 2 })
       .add('C1a', 'relay-contact-no', { coil: 'C1' })
-      .add('H1', 'indicator-lamp')
       .wire('ps:L+', 'S1:13')
       .wire('S1:14', 'C1:A1')
       .wire('C1:A2', 'ps:M')
       .wire('ps:L+', 'S2:13')
       .wire('S2:14', 'C1:R1')
       .wire('C1:R2', 'ps:M')
-      .wire('ps:L+', 'C1a:13')
-      .wire('C1a:14', 'H1:X1')
-      .wire('H1:X2', 'ps:M');
+      .wire('ps:L+', 'C1a:13');
     const pulse = (t: number, button: string) => [press(t, button), release(t + 0.05, button)];
-    const trace = run(circuit, [...pulse(0.1, 'S1'), ...pulse(0.3, 'S1'), press(0.5, 'S2'), ...pulse(0.6, 'S1'), release(0.8, 'S2'), ...pulse(1.0, 'S1')], 1.2);
+    const trace = run(lamp(circuit, 'H1', 'C1a:14'), [...pulse(0.1, 'S1'), ...pulse(0.3, 'S1'), press(0.5, 'S2'), ...pulse(0.6, 'S1'), release(0.8, 'S2'), ...pulse(1.0, 'S1')], 1.2);
     expect(at(trace, 'C1:count', 0.2)).toBe(1);
     expect(at(trace, 'H1:lit', 0.2)).toBe(0);
     expect(at(trace, 'C1:count', 0.4)).toBe(2);
@@ -290,6 +239,6 @@ describe('control circuit co-simulation', () => {
     expect(at(trace, 'H1:lit', 0.55)).toBe(0);
     expect(at(trace, 'C1:count', 0.7)).toBe(0);
     expect(at(trace, 'C1:count', 1.1)).toBe(1);
-    expect(trace.events.filter((e) => e.componentId === 'C1').map((e) => `${e.kind}${e.detail ? ` ${e.detail}` : ''}`)).toEqual(['counted 1', 'counted 2', 'reset', 'counted 1']);
+    expect(eventsOf(trace, 'C1').map((e) => `${e.kind}${e.detail ? ` ${e.detail}` : ''}`)).toEqual(['counted 1', 'counted 2', 'reset', 'counted 1']);
   });
 });
