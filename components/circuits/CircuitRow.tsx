@@ -9,7 +9,7 @@ export function CircuitRow({ circuit }: { circuit: CircuitSummary }) {
       <th scope="row" className="px-4 py-3 text-left font-normal">
         <span className="block font-medium text-ink">{circuit.title}</span>
         {circuit.description ? (
-          <span className="mt-0.5 line-clamp-2 block text-xs text-ink-soft">{circuit.description}</span>
+          <span className="mt-0.5 line-clamp-2 text-xs text-ink-soft">{circuit.description}</span>
         ) : null}
         {/* The author column is hidden on narrow screens, so the name moves under the title. */}
         <span className="mt-1 block text-xs text-ink-soft sm:hidden">
