@@ -321,14 +321,17 @@ export class Partition {
     return sum;
   }
 
-  /** Re-evaluates the committed state after a discrete change; wakes a quiescent partition. */
-  wake(): void {
+  /**
+   * Re-evaluates the committed state after a discrete change; wakes a quiescent partition.
+   * A changed opening makes the flows jump: the next step starts small (`restart`). A piston
+   * stopping or starting leaves the pressures' rates continuous, so the step size stays.
+   */
+  wake(restart = true): void {
     this.activeStale = true;
     this.quiescent = false;
     this.fValid = false;
     this.dirty = true;
-    // A discontinuity: restart with a small step and let the controller grow it again.
-    this.restart = true;
+    if (restart) this.restart = true;
   }
 
   refresh(): void {
@@ -417,7 +420,7 @@ export class Partition {
     const j = this.spec.pistons.indexOf(k);
     this.y[this.xIndex[j]!] = position;
     this.y[this.vIndex[j]!] = velocity;
-    this.wake();
+    this.wake(false);
   }
 
   /** Remembers the committed state, to undo the next step. */
@@ -486,6 +489,16 @@ export class Partition {
     const wanted = Math.min(this.h, this.tol.maxStepS);
     let h = Math.min(wanted, stop - this.time);
     let shortened = false;
+    /** A step size that passed the error test before being cut short to locate a crossing. */
+    let located = 0;
+    // A piston that would run into an end stop within the step meets the kink of its chamber
+    // volumes there, which costs rejected steps: end the step just past the stop instead.
+    const reach = this.endStopReach();
+    if (reach < h) {
+      located = wanted;
+      h = reach + 0.9 * EVENT_TOLERANCE_S;
+      shortened = true;
+    }
     for (;;) {
       const landsOnStop = h >= stop - this.time - 1e-15;
       const err = this.rosenbrock(h);
@@ -516,6 +529,7 @@ export class Partition {
       if (crossed && (1 - theta) * h > EVENT_TOLERANCE_S && h > EVENT_TOLERANCE_S) {
         this.fValid = false;
         this.writePositions(this.y);
+        located = Math.max(located, h);
         h = Math.max(theta * h + EVENT_TOLERANCE_S / 2, EVENT_TOLERANCE_S / 2);
         shortened = true;
         continue;
@@ -544,7 +558,8 @@ export class Partition {
       const grow = err > 0 ? Math.min(4, Math.max(0.2, 0.9 * Math.pow(err, -1 / 3))) : 4;
       // A step cut short only to land on a meeting point says nothing against the step size
       // the controller wanted: keep that for the next step.
-      this.h = Math.max(landsOnStop && !shortened && grow >= 1 ? Math.max(h * grow, wanted) : h * grow, 1e-9);
+      // Nor does a step cut short to land on a crossing: the size that passed the error test stays.
+      this.h = Math.max(landsOnStop && !shortened && grow >= 1 ? Math.max(h * grow, wanted) : Math.max(h * grow, located), 1e-9);
       if (crossed) {
         this.crossed = crossed;
         return 'crossed';
@@ -583,6 +598,22 @@ export class Partition {
     }
     const h0 = d1 > 0 ? (0.01 * Math.max(d0, 1)) / d1 : this.tol.maxStepS;
     return Math.max(RESTART_STEP_S, h0);
+  }
+
+  /** Time in which a free piston moving towards an end stop reaches it at its present speed, s (Infinity: none does). */
+  private endStopReach(): number {
+    let reach = Infinity;
+    const y = this.y;
+    const pistons = this.w.model.pistons;
+    for (let j = 0; j < this.pIndex.length; j += 1) {
+      const k = this.pIndex[j]!;
+      if (this.w.mode[k] !== 'free') continue;
+      const x = y[this.xIndex[j]!]!;
+      const v = y[this.vIndex[j]!]!;
+      if (v > 0) reach = Math.min(reach, (pistons[k]!.strokeM - x) / v);
+      else if (v < 0) reach = Math.min(reach, x / -v);
+    }
+    return reach;
   }
 
   /** Nothing moves and no mass drifts noticeably: the state can stand still until something wakes it. */
