@@ -198,6 +198,28 @@ export function signedIsoFlowPreparedInto(
   }
 }
 
+/**
+ * The flow of {@link signedIsoFlowPreparedInto} without its derivatives, kg/s (positive a→b):
+ * the solver's stage evaluations need no Jacobian. Same value bit for bit.
+ */
+export function signedIsoFlowPrepared(gain: number, b: number, m: number, pa: number, pb: number, epsilon: number, linearPhi: number): number {
+  const forward = pa >= pb;
+  const p1 = forward ? pa : pb;
+  const p2 = forward ? pb : pa;
+  let flow = 0;
+  if (p1 > 0 && gain > 0) {
+    const r = p2 / p1;
+    if (r > 1 - epsilon) flow = ((gain * linearPhi) / epsilon) * (p1 - p2);
+    else if (r <= b) flow = gain * p1;
+    else {
+      const x = (r - b) / (1 - b);
+      const u = 1 - x * x;
+      flow = gain * p1 * (m === 0.5 ? Math.sqrt(u) : Math.pow(u, m));
+    }
+  }
+  return forward ? flow : -flow;
+}
+
 /** Value of {@link isoMassFlowSmoothWithDerivatives} only, kg/s. */
 export function isoMassFlowSmooth(input: IsoFlowInput, epsilon: number = ISO_LINEAR_REGION_EPSILON): number {
   return isoMassFlowSmoothWithDerivatives(input, epsilon).flow;

@@ -1,4 +1,4 @@
-import { ISO_LINEAR_REGION_EPSILON, isoLinearRegionPhi, signedIsoFlowPreparedInto } from '../calc/iso6358';
+import { ISO_LINEAR_REGION_EPSILON, isoLinearRegionPhi, signedIsoFlowPrepared, signedIsoFlowPreparedInto } from '../calc/iso6358';
 import { SparseLu } from './sparse-lu';
 import { flags, floats, ints } from './typed-arrays';
 import type { World } from './world';
@@ -62,6 +62,7 @@ const [E1, E2, E3, E4] = ROS34PW2.e as [number, number, number, number];
 const LINEAR_EPSILON = ISO_LINEAR_REGION_EPSILON;
 // Bound once: module bindings of imports can cost a property read per call in some loaders.
 const flowInto = signedIsoFlowPreparedInto;
+const flowOnly = signedIsoFlowPrepared;
 
 /** Filter the error estimate through W⁻¹ (Shampine's device) so that stiff, well-damped nodes do not dictate the step. */
 const FILTER_ERROR = true;
@@ -116,8 +117,11 @@ export type OutputKind = (typeof OutputKind)[keyof typeof OutputKind];
 
 /** The guards of one partition: piston end stops, stiction, and its behaviours' conditions. */
 export interface GuardSource {
-  /** Appends the partition's behaviour guard values, with their owners. */
-  behaviourGuards(behaviours: readonly number[], out: number[], owners: number[]): void;
+  /**
+   * Writes the partition's behaviour guard values into `out` from index `at` on and returns the
+   * index after the last; when `owners` is given, appends each guard's owner (behaviour, index).
+   */
+  behaviourGuards(behaviours: readonly number[], out: number[], at: number, owners: number[] | null): number;
 }
 
 export class Partition {
@@ -215,9 +219,8 @@ export class Partition {
   private snapQuiescent = false;
   private snapGuards: number[] = [];
   private snapOwners: number[] = [];
-  /** Spare guard lists that a step fills and then swaps with the committed ones (no garbage per step). */
+  /** A spare guard list that a step fills and then swaps with the committed one (no garbage per step). */
   private spareGuards: number[] = [];
-  private spareOwners: number[] = [];
   // Trace columns this partition fills between meeting points, and their values at the committed state.
   private outCols = new Int32Array(0);
   private outKind = new Uint8Array(0);
@@ -336,7 +339,7 @@ export class Partition {
 
   refresh(): void {
     this.writePositions(this.y);
-    this.evaluate(this.y, this.f);
+    this.evaluate(this.y, this.f, true);
     this.fValid = true;
     this.readOutputs(this.outPrev);
   }
@@ -443,9 +446,8 @@ export class Partition {
     this.y.set(this.snapY);
     this.h = this.snapH;
     this.quiescent = false;
-    // The undone step's lists become the spares; the snapshot's are committed again.
+    // The undone step's list becomes the spare; the snapshot's is committed again.
     this.spareGuards = this.guardValues;
-    this.spareOwners = this.guardOwners;
     this.guardValues = this.snapGuards;
     this.guardOwners = this.snapOwners;
     this.fValid = false;
@@ -510,11 +512,9 @@ export class Partition {
         if (h < 1e-12) throw new Error('step size underflow: the circuit could not be integrated');
         continue;
       }
+      // The owners stay as they are: only a discrete change (computeGuards) changes what guards there are.
       const after = this.spareGuards;
-      const owners = this.spareOwners;
-      after.length = 0;
-      owners.length = 0;
-      this.collectGuards(after, owners);
+      this.collectGuards(after, null);
       let theta = 1;
       let crossed: number[] | null = null;
       const before = this.guardValues;
@@ -552,9 +552,7 @@ export class Partition {
       this.fCandidate = f;
       this.fValid = true;
       this.spareGuards = this.guardValues;
-      this.spareOwners = this.guardOwners;
       this.guardValues = after;
-      this.guardOwners = owners;
       const grow = err > 0 ? Math.min(4, Math.max(0.2, 0.9 * Math.pow(err, -1 / 3))) : 4;
       // A step cut short only to land on a meeting point says nothing against the step size
       // the controller wanted: keep that for the next step.
@@ -655,17 +653,17 @@ export class Partition {
     this.lu.solve(u1);
     for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A21 * u1[i]!;
     this.writePositions(yStage);
-    if (!this.evaluate(yStage, fStage)) return -1;
+    if (!this.evaluate(yStage, fStage, false)) return -1;
     for (let i = 0; i < n; i += 1) u2[i] = gh * fStage[i]! + C21 * u1[i]!;
     this.lu.solve(u2);
     for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A31 * u1[i]! + A32 * u2[i]!;
     this.writePositions(yStage);
-    if (!this.evaluate(yStage, fStage)) return -1;
+    if (!this.evaluate(yStage, fStage, false)) return -1;
     for (let i = 0; i < n; i += 1) u3[i] = gh * fStage[i]! + C31 * u1[i]! + C32 * u2[i]!;
     this.lu.solve(u3);
     for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A41 * u1[i]! + A42 * u2[i]! + A43 * u3[i]!;
     this.writePositions(yStage);
-    if (!this.evaluate(yStage, fStage)) return -1;
+    if (!this.evaluate(yStage, fStage, false)) return -1;
     for (let i = 0; i < n; i += 1) u4[i] = gh * fStage[i]! + C41 * u1[i]! + C42 * u2[i]! + C43 * u3[i]!;
     this.lu.solve(u4);
     const yNew = this.candidate;
@@ -692,7 +690,7 @@ export class Partition {
     // A rejected step needs no right-hand side at its end.
     if (norm > 1) return norm;
     this.writePositions(yNew);
-    if (!this.evaluate(yNew, this.fCandidate)) return -1;
+    if (!this.evaluate(yNew, this.fCandidate, true)) return -1;
     return norm;
   }
 
@@ -717,8 +715,12 @@ export class Partition {
     return v;
   }
 
-  /** Pressures, flows and derivatives at y (positions already written); false if a mass went negative. */
-  private evaluate(y: Float64Array, f: Float64Array): boolean {
+  /**
+   * Pressures, flows and (with `derivatives`) their derivatives at y, positions already written;
+   * false if a mass went negative. Stage evaluations leave the derivatives out: the next
+   * Jacobian is assembled at the state a step ends on, which is evaluated with them.
+   */
+  private evaluate(y: Float64Array, f: Float64Array, derivatives: boolean): boolean {
     const w = this.w;
     const pressure = w.pressure;
     let physical = true;
@@ -737,7 +739,7 @@ export class Partition {
       const n = this.nodeExponent[i]!;
       if (n === 1) {
         pressure[node] = isothermal;
-        w.pressurePerMass[node] = rt / v;
+        if (derivatives) w.pressurePerMass[node] = rt / v;
       } else {
         // Polytropic: p = p_amb·(ρ/ρ_amb)^n, and ρ/ρ_amb is the isothermal pressure over p_amb.
         const p = ambient * Math.pow(isothermal / ambient, n);
@@ -745,7 +747,7 @@ export class Partition {
         w.pressurePerMass[node] = (n * p) / mass;
       }
     }
-    f.fill(0);
+    for (let i = 0; i < f.length; i += 1) f[i] = 0;
     if (this.activeStale) this.findActive();
     const scratch = this.scratch;
     const restrictions = w.model.restrictions;
@@ -763,6 +765,15 @@ export class Partition {
       }
       const pa = pressure[this.rFromNode[j]!]! - this.rCracking[j]!;
       const pb = pressure[this.rToNode[j]!]!;
+      const a = this.rowFrom[j]!;
+      const b = this.rowTo[j]!;
+      if (!derivatives) {
+        const q = k > 0 && !(this.rOneWay[j] && pa <= pb) ? k * flowOnly(w.gain[r]!, this.rCritical[j]!, 0.5, pa, pb, LINEAR_EPSILON, this.rLinearPhi[j]!) : 0;
+        w.flow[r] = q;
+        f[a] = f[a]! - q;
+        f[b] = f[b]! + q;
+        continue;
+      }
       let q = 0;
       let da = 0;
       let db = 0;
@@ -778,8 +789,6 @@ export class Partition {
       w.dFlowA[r] = da;
       w.dFlowB[r] = db;
       w.dFlowC[r] = dc;
-      const a = this.rowFrom[j]!;
-      const b = this.rowTo[j]!;
       f[a] = f[a]! - q;
       f[b] = f[b]! + q;
     }
@@ -814,28 +823,44 @@ export class Partition {
     this.activeStale = false;
   }
 
-  private collectGuards(out: number[], owners: number[]): void {
+  /**
+   * Writes the guard values into `out` (three per piston, then the behaviours'), by index so that
+   * a list of the right length is reused without garbage; with `owners`, appends the owners too.
+   */
+  private collectGuards(out: number[], owners: number[] | null): void {
     const w = this.w;
+    let n = 0;
     for (const k of this.spec.pistons) {
       const p = w.model.pistons[k]!;
       const x = w.position[k]!;
       const drive = w.driveForce(k);
+      let g0 = -1;
+      let g1 = -1;
+      let g2 = -1;
       switch (w.mode[k]) {
         case 'free':
-          out.push(x, p.strokeM - x, w.velocity[k]! * w.direction[k]! + 1e-12);
+          g0 = x;
+          g1 = p.strokeM - x;
+          g2 = w.velocity[k]! * w.direction[k]! + 1e-12;
           break;
         case 'end-min':
-          out.push(drive - p.breakawayN, -1, -1);
+          g0 = drive - p.breakawayN;
           break;
         case 'end-max':
-          out.push(-drive - p.breakawayN, -1, -1);
+          g0 = -drive - p.breakawayN;
           break;
         case 'stuck':
-          out.push(drive - p.breakawayN, -drive - p.breakawayN, -1);
+          g0 = drive - p.breakawayN;
+          g1 = -drive - p.breakawayN;
           break;
       }
+      out[n] = g0;
+      out[n + 1] = g1;
+      out[n + 2] = g2;
+      n += 3;
     }
-    this.guardSource.behaviourGuards(this.spec.behaviours, out, owners);
+    n = this.guardSource.behaviourGuards(this.spec.behaviours, out, n, owners);
+    if (out.length !== n) out.length = n;
   }
 
   /** Number of piston guards at the front of the guard list (three per piston). */

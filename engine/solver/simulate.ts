@@ -519,14 +519,17 @@ class Run implements GuardSource, OutputRows {
     }
   }
 
-  behaviourGuards(behaviours: readonly number[], out: number[], owners: number[]): void {
+  behaviourGuards(behaviours: readonly number[], out: number[], at: number, owners: number[] | null): number {
+    let n = at;
     for (const b of behaviours) {
-      const g = this.m.behaviours[b]!.behaviour.guards?.(this.api) ?? [];
+      const g = this.m.behaviours[b]!.behaviour.guards?.(this.api);
+      if (!g) continue;
       for (let i = 0; i < g.length; i += 1) {
-        out.push(g[i]!);
-        owners.push(b, i);
+        out[n++] = g[i]!;
+        owners?.push(b, i);
       }
     }
+    return n;
   }
 
   private firePistonGuard(k: number, which: number): void {

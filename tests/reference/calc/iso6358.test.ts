@@ -3,6 +3,7 @@ import { KAPPA_AIR, R_AIR_J_PER_KG_K, RHO_0_KG_PER_M3, T0_K } from '@/engine/cal
 import {
   anrLitresPerMinuteFromMass,
   anrVolumeFlowFromMass,
+  chokedGain,
   dm3PerSBarToM3PerSPa,
   idealNozzleConductance,
   ISO_LINEAR_REGION_EPSILON,
@@ -12,7 +13,10 @@ import {
   m3PerSPaToDm3PerSBar,
   massFlowFromAnrLitresPerMinute,
   massFlowFromAnrVolume,
+  isoLinearRegionPhi,
   signedIsoFlow,
+  signedIsoFlowPrepared,
+  signedIsoFlowPreparedInto,
 } from '@/engine/calc/iso6358';
 
 const C1 = 1e-8; // 1 dm³/(s·bar) in m³/(s·Pa)
@@ -233,5 +237,25 @@ describe('signed bidirectional flow', () => {
   it('matches the one-directional smooth flow in the forward direction', () => {
     const f = isoMassFlowSmooth({ conductance: 2e-8, criticalRatio: 0.3, upstreamPa: 6e5, downstreamPa: 4e5 });
     expect(sf(6e5, 4e5).flow).toBe(f);
+  });
+
+  it('gives the same flow bit for bit without derivatives as with them, in every region and both directions', () => {
+    // The solver's stage evaluations use the value-only form; a step must not depend on which was used.
+    const out = { flow: 0, dFlowdPa: 0, dFlowdPb: 0 };
+    const gain = chokedGain(2e-8, T0_K);
+    for (const b of [0.3, 0.5]) {
+      const phi = isoLinearRegionPhi(b, 0.5, ISO_LINEAR_REGION_EPSILON);
+      for (const [pa, pb] of [
+        [7e5, 1e5], // choked
+        [7e5, 5e5], // subsonic
+        [5e5, 4.9999e5], // linear region
+        [3e5, 6e5], // reversed
+        [4e5, 4e5], // no difference
+        [0, 2e5], // empty upstream node
+      ] as const) {
+        signedIsoFlowPreparedInto(out, gain, b, 0.5, pa, pb, ISO_LINEAR_REGION_EPSILON, phi);
+        expect(signedIsoFlowPrepared(gain, b, 0.5, pa, pb, ISO_LINEAR_REGION_EPSILON, phi)).toBe(out.flow);
+      }
+    }
   });
 });
