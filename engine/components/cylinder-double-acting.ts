@@ -64,11 +64,14 @@ export const cylinderDoubleActing: ComponentType = {
       ctx.restriction({ name: `cushion-check-${port}`, from: ctx.port(port), to: chamber, conductance: ctx.num('portConductance'), criticalRatio: 0.3, oneWay: true, crackingPa: 5_000 });
     }
     const inCushion = [false, false];
+    const guardValues = [0, 0];
     return {
       guards(api) {
         const x = api.position(piston);
         // Cap side cushions near retraction, rod side near full extension.
-        return [cushion - x, x - (stroke - cushion)];
+        guardValues[0] = cushion - x;
+        guardValues[1] = x - (stroke - cushion);
+        return guardValues;
       },
       onGuard(index, rising, api) {
         inCushion[index] = rising;

@@ -192,6 +192,7 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
   };
 
   const isLatching = (kind: Actuation | null) => kind === 'lever-detent' || kind === 'selector-detent';
+  const guardValues = new Array<number>(2 + 2 * links.length).fill(0);
 
   return {
     start(api) {
@@ -199,16 +200,16 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
       reconsider(api);
     },
     guards(api) {
-      const out: number[] = [];
       for (let s = 0; s < 2; s += 1) {
         const gauge = api.pressure(pilotNodes[s]!) - api.ambientPa();
-        out.push(gauge - (sides[s]!.piloted ? threshold - hysteresis : threshold));
+        guardValues[s] = gauge - (sides[s]!.piloted ? threshold - hysteresis : threshold);
       }
-      for (const link of links) {
+      links.forEach((link, i) => {
         const x = api.position(link.piston);
-        out.push(x - (link.positionM - ROLLER_WINDOW_M), link.positionM + ROLLER_WINDOW_M - x);
-      }
-      return out;
+        guardValues[2 + 2 * i] = x - (link.positionM - ROLLER_WINDOW_M);
+        guardValues[3 + 2 * i] = link.positionM + ROLLER_WINDOW_M - x;
+      });
+      return guardValues;
     },
     onGuard(index, rising, api) {
       if (index < 2) {

@@ -37,10 +37,12 @@ export function defineLogicValve(def: { id: string; label: string; description: 
       let moving = false;
       // Positive when input 1.2 should take over from 1.1 (or the reverse), beyond the changeover margin.
       const preference = (p1: number, p2: number) => (def.passes === 'lower' ? p1 - p2 : p2 - p1);
+      const guardValues = [0];
       return {
         guards(api) {
           const d = preference(api.pressure(inputs[0]), api.pressure(inputs[1]));
-          return [joined === 0 ? d - LOGIC_CHANGEOVER_PA : -d - LOGIC_CHANGEOVER_PA];
+          guardValues[0] = joined === 0 ? d - LOGIC_CHANGEOVER_PA : -d - LOGIC_CHANGEOVER_PA;
+          return guardValues;
         },
         onGuard(_index, rising, api) {
           if (!rising || moving) return;

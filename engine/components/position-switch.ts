@@ -36,14 +36,15 @@ export function positionSwitch(def: { id: string; label: string; description: st
         control.setContacts(def.kind === 'changeover' ? [[contacts[0]!, !actuated], [contacts[1]!, actuated]] : [[contacts[0]!, actuated]], api);
       };
       const inside = (api: RuntimeApi) => links.some((l) => Math.abs(api.position(l.piston) - l.positionM) <= reach());
+      const guardValues = new Array<number>(2 * links.length).fill(0);
       return {
         guards(api) {
-          const out: number[] = [];
-          for (const l of links) {
+          links.forEach((l, i) => {
             const x = api.position(l.piston);
-            out.push(x - (l.positionM - reach()), l.positionM + reach() - x);
-          }
-          return out;
+            guardValues[2 * i] = x - (l.positionM - reach());
+            guardValues[2 * i + 1] = l.positionM + reach() - x;
+          });
+          return guardValues;
         },
         onGuard(_index, _rising, api) {
           apply(api, inside(api));

@@ -30,8 +30,12 @@ export const pressureSwitch: ComponentType = {
       api.event(operated ? 'operated' : 'released');
       control.setContacts([[nc, !operated], [no, operated]], api);
     };
+    const guardValues = [0];
     return {
-      guards: (api) => [margin(api)],
+      guards(api) {
+        guardValues[0] = margin(api);
+        return guardValues;
+      },
       onGuard: (_i, _rising, api) => apply(api),
       start: apply,
       signals: () => ({ operated: operated ? 1 : 0 }),

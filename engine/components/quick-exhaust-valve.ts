@@ -44,10 +44,12 @@ export const quickExhaustValve: ComponentType = {
     let exhausting = false;
     let wantsExhaust = false;
     let moving = false;
+    const guardValues = [0];
     return {
       guards(api) {
         const d = api.pressure(work) - api.pressure(inlet);
-        return [wantsExhaust ? d + RESEAT_DIFFERENCE_PA : d - OPENING_DIFFERENCE_PA];
+        guardValues[0] = wantsExhaust ? d + RESEAT_DIFFERENCE_PA : d - OPENING_DIFFERENCE_PA;
+        return guardValues;
       },
       onGuard(_i, rising, api) {
         wantsExhaust = rising;

@@ -130,8 +130,12 @@ export interface InputCommand {
 
 /** The running behaviour of one placed component. All methods are optional. */
 export interface Behaviour {
-  /** Continuous functions of the state whose zero crossings are events (located in time). */
-  guards?(api: RuntimeApi): number[];
+  /**
+   * Continuous functions of the state whose zero crossings are events (located in time). Called
+   * at every accepted step: the same array may come back each time, as the caller copies the
+   * values at once (and their number must not change between discrete events).
+   */
+  guards?(api: RuntimeApi): readonly number[];
   onGuard?(index: number, rising: boolean, api: RuntimeApi): void;
   onTimer?(tag: string, api: RuntimeApi): void;
   onInput?(command: InputCommand, api: RuntimeApi): void;
