@@ -10,7 +10,8 @@ export class SparseLu {
   readonly size: number;
   /** Values of every stored entry of the permuted matrix (diagonal, upper, lower). */
   readonly values: Float64Array;
-  private readonly perm: Int32Array; // order position → original index
+  /** Elimination order: order position → original index. */
+  readonly perm: Int32Array;
   private readonly inv: Int32Array; // original index → order position
   private readonly slotOf = new Map<number, number>();
   private readonly diagSlot: Int32Array;
@@ -26,7 +27,8 @@ export class SparseLu {
   private readonly upSlots: Int32Array[] = [];
   // Update triples: target slot, lower slot, upper slot.
   private readonly updates: Int32Array;
-  private readonly work: Float64Array;
+  /** 1 / pivot of each order position, kept by factor() so that the solves multiply instead of dividing. */
+  private readonly inversePivot: Float64Array;
 
   /** `pattern` lists the off-diagonal (row, column) pairs that can be non-zero, in original indices. */
   constructor(size: number, pattern: ReadonlyArray<readonly [number, number]>) {
@@ -99,7 +101,7 @@ export class SparseLu {
       this.flatUp.set(this.upSlots[k]!, this.ptr[k]!);
     }
     this.values = new Float64Array(slots);
-    this.work = new Float64Array(size);
+    this.inversePivot = new Float64Array(size);
   }
 
   /** Slot of entry (row, col) in original indices; -1 when it is structurally zero. */
@@ -114,9 +116,11 @@ export class SparseLu {
     const ptr = this.ptr;
     const flatLow = this.flatLow;
     const diag = this.diagSlot;
+    const inversePivot = this.inversePivot;
     let u = 0;
     for (let k = 0; k < this.size; k += 1) {
       const inverse = 1 / v[diag[k]!]!;
+      inversePivot[k] = inverse;
       const from = ptr[k]!;
       const to = ptr[k + 1]!;
       for (let a = from; a < to; a += 1) v[flatLow[a]!] = v[flatLow[a]!]! * inverse;
@@ -125,18 +129,18 @@ export class SparseLu {
     }
   }
 
-  /** Solves (LU) x = b in place on b (original indices). */
-  solve(b: Float64Array): void {
+  /**
+   * Solves (LU) x = b in place on b given in elimination order (entry k belongs to original
+   * index perm[k]): for callers that keep their vectors in that order and save the reordering.
+   */
+  solveOrdered(w: Float64Array): void {
     const v = this.values;
-    const w = this.work;
-    const perm = this.perm;
     const ptr = this.ptr;
     const index = this.flatIndex;
     const low = this.flatLow;
     const up = this.flatUp;
-    const diag = this.diagSlot;
+    const inversePivot = this.inversePivot;
     const size = this.size;
-    for (let k = 0; k < size; k += 1) w[k] = b[perm[k]!]!;
     for (let k = 0; k < size; k += 1) {
       const wk = w[k]!;
       if (wk === 0) continue;
@@ -145,9 +149,8 @@ export class SparseLu {
     for (let k = size - 1; k >= 0; k -= 1) {
       let sum = w[k]!;
       for (let c = ptr[k]!, to = ptr[k + 1]!; c < to; c += 1) sum -= v[up[c]!]! * w[index[c]!]!;
-      w[k] = sum / v[diag[k]!]!;
+      w[k] = sum * inversePivot[k]!;
     }
-    for (let k = 0; k < size; k += 1) b[perm[k]!] = w[k]!;
   }
 }
 
