@@ -574,28 +574,45 @@ export class Partition {
   }
 
   /**
-   * First step after a discrete change: a hundredth of the time in which the state would
-   * change by its own size at the present rates (both in tolerance units), the usual
-   * starting-step heuristic (Hairer, Nørsett & Wanner, Solving ODEs I, §II.4), never below
-   * RESTART_STEP_S; the error control takes it from there.
+   * First step after a discrete change, by the usual starting-step heuristic (Hairer, Nørsett &
+   * Wanner, Solving ODEs I, §II.4), in tolerance units: h0, a hundredth of the time in which the
+   * state would change by its own size at the present rates; then an explicit Euler probe of
+   * size h0 measures how fast the rates change (d2), and the step is the one whose error, of
+   * order h³ for the embedded estimate, would be a hundredth of the tolerance, at most 100·h0.
+   * Never below RESTART_STEP_S; the error control takes it from there.
    */
   private restartStep(): number {
     if (!this.fValid) this.refresh();
     const firstPiston = this.nMass + this.spec.fixedNodes.length;
+    const scaleOf = (i: number) => {
+      const magnitude = Math.abs(this.y[i]!);
+      return i < this.nMass ? this.massScale(i, magnitude) : ((i - firstPiston) % 2 === 0 ? POSITION_TOLERANCE_M : VELOCITY_TOLERANCE_M_PER_S) + this.tol.relTol * magnitude;
+    };
     let d0 = 0;
     let d1 = 0;
     for (let i = 0; i < this.nState; i += 1) {
       if (i >= this.nMass && i < firstPiston) continue;
-      const magnitude = Math.abs(this.y[i]!);
-      const scale =
-        i < this.nMass
-          ? this.massScale(i, magnitude)
-          : ((i - firstPiston) % 2 === 0 ? POSITION_TOLERANCE_M : VELOCITY_TOLERANCE_M_PER_S) + this.tol.relTol * magnitude;
-      d0 = Math.max(d0, magnitude / scale);
+      const scale = scaleOf(i);
+      d0 = Math.max(d0, Math.abs(this.y[i]!) / scale);
       d1 = Math.max(d1, Math.abs(this.f[i]!) / scale);
     }
-    const h0 = d1 > 0 ? (0.01 * Math.max(d0, 1)) / d1 : this.tol.maxStepS;
-    return Math.max(RESTART_STEP_S, h0);
+    if (!(d1 > 0)) return this.tol.maxStepS;
+    const h0 = (0.01 * Math.max(d0, 1)) / d1;
+    const probe = this.stage;
+    const rates = this.fStage;
+    for (let i = 0; i < this.nState; i += 1) probe[i] = this.y[i]! + h0 * this.f[i]!;
+    this.writePositions(probe);
+    const physical = this.evaluate(probe, rates, false);
+    // The world now describes the probe.
+    this.fValid = false;
+    if (!physical) return Math.max(RESTART_STEP_S, h0);
+    let d2 = 0;
+    for (let i = 0; i < this.nState; i += 1) {
+      if (i >= this.nMass && i < firstPiston) continue;
+      d2 = Math.max(d2, Math.abs(rates[i]! - this.f[i]!) / scaleOf(i) / h0);
+    }
+    const h1 = Math.pow(0.01 / Math.max(d1, d2), 1 / 3);
+    return Math.max(RESTART_STEP_S, Math.min(100 * h0, h1));
   }
 
   /** Time in which a free piston moving towards an end stop reaches it at its present speed, s (Infinity: none does). */
