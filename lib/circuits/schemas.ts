@@ -22,3 +22,13 @@ export const createCircuitBodySchema = z
 export type CreateCircuitBody = z.infer<typeof createCircuitBodySchema>;
 
 export const circuitIdSchema = z.string().uuid('not a circuit id');
+
+export const appendRevisionBodySchema = z
+  .object({
+    document: circuitDocumentSchema,
+    message: z.string().trim().min(1, 'say what changed').max(500, 'at most 500 characters'),
+    /** The circuit's lock version the writer read; a stale one is a conflict, not an overwrite. */
+    expectedLockVersion: z.number().int().min(0),
+  })
+  .strict();
+export type AppendRevisionBody = z.infer<typeof appendRevisionBodySchema>;

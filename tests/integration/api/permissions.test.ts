@@ -6,6 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import * as passwordResetConfirm from '@/app/api/account/password-reset/confirm/route';
 import * as passwordResetRequest from '@/app/api/account/password-reset/request/route';
 import * as signUp from '@/app/api/account/sign-up/route';
+import * as circuitRevisions from '@/app/api/circuits/[id]/revisions/route';
 import * as circuitOne from '@/app/api/circuits/[id]/route';
 import * as circuits from '@/app/api/circuits/route';
 import * as health from '@/app/api/health/route';
@@ -21,7 +22,7 @@ import * as workspaces from '@/app/api/workspaces/route';
 import * as switchWorkspace from '@/app/api/workspaces/switch/route';
 import { newToken } from '@/lib/auth/tokens';
 import { createCircuit } from '@/lib/circuits/create-circuit';
-import { Invitation, PasswordResetToken } from '@/models';
+import { Circuit, Invitation, PasswordResetToken } from '@/models';
 import { apiRequest, createTestWorkspace, type TestWorkspace } from '../fixtures';
 
 /**
@@ -36,6 +37,7 @@ interface World {
   ws: TestWorkspace;
   other: TestWorkspace;
   circuitId: string;
+  circuitLockVersion: number;
   invitationId: string;
   invitationToken: string;
   resetToken: string;
@@ -62,6 +64,7 @@ const TABLE: RouteCase[] = [
   { route: 'GET /api/circuits', handler: circuits.GET, path: () => '/api/circuits', expect: row(401, 200, 200, 200, 200, 200, 200) },
   { route: 'POST /api/circuits', handler: circuits.POST, path: () => '/api/circuits', body: () => ({ title: 'Table cell' }), expect: row(401, 403, 403, 403, 201, 201, 201) },
   { route: 'GET /api/circuits/[id]', handler: circuitOne.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/revisions', handler: circuitRevisions.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/revisions`, params: (w) => ({ id: w.circuitId }), body: (w) => ({ document: { schemaVersion: 1 }, message: 'Table cell', expectedLockVersion: w.circuitLockVersion }), expect: row(401, 403, 403, 403, 201, 404, 201) },
   { route: 'GET /api/workspaces', handler: workspaces.GET, path: () => '/api/workspaces', expect: row(401, 200, 200, 200, 200, 200, 200) },
   { route: 'POST /api/workspaces', handler: workspaces.POST, path: () => '/api/workspaces', body: () => ({ name: 'Cell workspace' }), expect: row(401, 201, 201, 201, 201, 201, 201) },
   { route: 'POST /api/workspaces/switch', handler: switchWorkspace.POST, path: () => '/api/workspaces/switch', body: (w) => ({ workspaceId: w.ws.workspaceId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
@@ -88,6 +91,7 @@ async function makeWorld(): Promise<World> {
   const ws = await createTestWorkspace('perm');
   const other = await createTestWorkspace('perm-other');
   const circuit = await createCircuit({ workspaceId: ws.workspaceId, authorId: ws.users.engineer.id, input: { title: 'Permission target', description: '', message: '' } });
+  const { lockVersion: circuitLockVersion } = await Circuit.findByPk(circuit.id, { rejectOnEmpty: true });
   const invitation = newToken();
   const inv = await Invitation.create({
     workspaceId: ws.workspaceId,
@@ -99,7 +103,7 @@ async function makeWorld(): Promise<World> {
   });
   const reset = newToken();
   await PasswordResetToken.create({ userId: ws.users.technician.id, tokenHash: reset.hash, expiresAt: new Date(Date.now() + 3_600_000) });
-  return { ws, other, circuitId: circuit.id, invitationId: inv.id, invitationToken: invitation.token, resetToken: reset.token };
+  return { ws, other, circuitId: circuit.id, circuitLockVersion, invitationId: inv.id, invitationToken: invitation.token, resetToken: reset.token };
 }
 
 function userFor(kind: ActorKind, w: World): string | undefined {
