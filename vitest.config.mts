@@ -14,7 +14,7 @@ export default defineConfig({
   test: {
     environment: 'node',
     projects: [
-      { extends: true, test: { name: 'unit', include: ['tests/engine/**/*.test.ts', 'tests/lib/**/*.test.ts', 'tests/scripts/**/*.test.ts'] } },
+      { extends: true, test: { name: 'unit', include: ['tests/engine/**/*.test.ts', 'tests/lib/**/*.test.ts', 'tests/scripts/**/*.test.ts', 'tests/components/**/*.test.{ts,tsx}'] } },
       { extends: true, test: { name: 'reference', include: ['tests/reference/**/*.test.ts'] } },
       {
         extends: true,

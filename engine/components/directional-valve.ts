@@ -89,6 +89,8 @@ export function defineDirectionalValve(def: ValveDefinition): ComponentType {
     ports: def.ports,
     parameters,
     states: def.positions.map((p) => p.name),
+    positions: def.positions,
+    pilotPorts: def.pilotPorts,
     inputs: ['press', 'release', 'toggle', 'set'],
     build: (ctx) => buildValveBehaviour(ctx, def),
   };

@@ -192,6 +192,13 @@ export interface ComponentType {
   readonly parameters: Readonly<Record<string, ParameterSpec>>;
   /** Discrete states the type can be in (valve positions, logic states), for symbols and the trace. */
   readonly states: readonly string[];
+  /**
+   * Directional control valves: the port pairs joined in each switching position, in the order
+   * of `states` (every other port blocked there), for the drawn envelopes.
+   */
+  readonly positions?: ReadonlyArray<{ readonly name: string; readonly passages: ReadonlyArray<readonly [string, string]> }>;
+  /** Directional control valves: the pilot or actuation ports of side a and side b (14/12, 12/10). */
+  readonly pilotPorts?: readonly [string, string];
   /** Manual inputs a user can give on the drawing. */
   readonly inputs?: readonly InputAction[];
   build(ctx: BuildContext): Behaviour;

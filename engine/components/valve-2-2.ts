@@ -16,4 +16,6 @@ export const valve22 = defineDirectionalValve({
     { name: 'closed', passages: [] },
   ],
   pilotPorts: ['12', '10'],
+  // Mostly a button, roller or pilot signal: it sits with the signal elements on a drawing.
+  category: 'input',
 });

@@ -11,4 +11,6 @@ export const valve32Nc = defineDirectionalValve({
     EXHAUST_2_3,
   ],
   pilotPorts: ['12', '10'],
+  // Mostly a button, roller or pilot signal: it sits with the signal elements on a drawing.
+  category: 'input',
 });

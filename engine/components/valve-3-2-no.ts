@@ -17,4 +17,6 @@ export const valve32No = defineDirectionalValve({
     OPEN_1_2,
   ],
   pilotPorts: ['10', '12'],
+  // Mostly a button, roller or pilot signal: it sits with the signal elements on a drawing.
+  category: 'input',
 });

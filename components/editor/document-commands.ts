@@ -1,0 +1,117 @@
+import { componentTypeById } from '@/engine/components/registry';
+import type { PortRole } from '@/engine/components/types';
+import type { CircuitDocument } from '@/engine/document/schema';
+import { nextTag } from './tags';
+
+/**
+ * Edits of the circuit document, written as immer recipes on a draft: the editor store runs
+ * them and records their patches for undo. Pure functions of the document, so they are tested
+ * without a canvas.
+ */
+
+export interface PortRef {
+  component: string;
+  port: string;
+}
+
+/** What a new tube gets until the engineer sets it: half a metre of 4 mm bore (common practice for a valve-to-cylinder line). */
+export const NEW_TUBE = { lengthM: 0.5, innerDiameterM: 0.004 } as const;
+
+/** Adds a component of a registry type at a drawing position and returns its id (the type is known). */
+export function addComponent(draft: CircuitDocument, typeId: string, position: { x: number; y: number }): string {
+  const type = componentTypeById(typeId);
+  if (!type) throw new Error(`unknown component type ${typeId}`);
+  const id = freeId(draft, typeId);
+  draft.components.push({
+    id,
+    type: typeId,
+    tag: nextTag(type, draft.components.map((c) => c.tag)),
+    parameters: {},
+    position: { x: position.x, y: position.y },
+    rotation: 0,
+    mirrored: false,
+  });
+  return id;
+}
+
+/** Moves components to new drawing positions. */
+export function moveComponents(draft: CircuitDocument, moves: ReadonlyArray<{ id: string; x: number; y: number }>): void {
+  const byId = new Map(draft.components.map((c) => [c.id, c]));
+  for (const move of moves) {
+    const component = byId.get(move.id);
+    if (component) component.position = { x: move.x, y: move.y };
+  }
+}
+
+export interface ItemSelection {
+  components: readonly string[];
+  tubes: readonly string[];
+  wires: readonly string[];
+}
+
+/** Removes components (with every tube, wire and link that touches them), tubes and wires. */
+export function removeItems(draft: CircuitDocument, items: ItemSelection): void {
+  const gone = new Set(items.components);
+  const touches = (end: PortRef) => gone.has(end.component);
+  const tubes = new Set(items.tubes);
+  const wires = new Set(items.wires);
+  // Lists are replaced only when something leaves them, so an empty removal is no edit at all.
+  const keep = <T>(list: T[], stays: (item: T) => boolean): T[] => (list.every(stays) ? list : list.filter(stays));
+  draft.components = keep(draft.components, (c) => !gone.has(c.id));
+  draft.tubes = keep(draft.tubes, (t) => !tubes.has(t.id) && !touches(t.from) && !touches(t.to));
+  draft.wires = keep(draft.wires, (w) => !wires.has(w.id) && !touches(w.from) && !touches(w.to));
+  draft.links = keep(draft.links, (l) => !gone.has(l.from) && !gone.has(l.to));
+}
+
+export type ConnectionCheck = { ok: true; kind: 'tube' | 'wire' } | { ok: false; reason: string };
+
+/**
+ * Whether two ports may be joined: air ports by a tube, electrical terminals by a wire, never
+ * a port to itself, an air port to a terminal, or twice the same pair.
+ */
+export function checkConnection(document: CircuitDocument, a: PortRef, b: PortRef): ConnectionCheck {
+  if (a.component === b.component && a.port === b.port) return { ok: false, reason: 'A port cannot be joined to itself.' };
+  const roleA = roleOf(document, a);
+  const roleB = roleOf(document, b);
+  if (!roleA || !roleB) return { ok: false, reason: 'That port does not exist.' };
+  const electricA = roleA === 'terminal';
+  if (electricA !== (roleB === 'terminal')) return { ok: false, reason: 'An air port joins air ports only, and a terminal joins terminals only.' };
+  const same = (x: PortRef, y: PortRef) => x.component === y.component && x.port === y.port;
+  const existing = electricA ? document.wires : document.tubes;
+  if (existing.some((c) => (same(c.from, a) && same(c.to, b)) || (same(c.from, b) && same(c.to, a)))) {
+    return { ok: false, reason: 'These two ports are already joined.' };
+  }
+  return { ok: true, kind: electricA ? 'wire' : 'tube' };
+}
+
+/** Joins two ports with a tube or a wire (see checkConnection) and returns its id, or the reason it may not. */
+export function connect(draft: CircuitDocument, a: PortRef, b: PortRef): { ok: true; id: string } | { ok: false; reason: string } {
+  const check = checkConnection(draft, a, b);
+  if (!check.ok) return check;
+  const from = { component: a.component, port: a.port };
+  const to = { component: b.component, port: b.port };
+  if (check.kind === 'tube') {
+    const id = freeConnectionId(draft, 't');
+    draft.tubes.push({ id, from, to, ...NEW_TUBE, bends: [] });
+    return { ok: true, id };
+  }
+  const id = freeConnectionId(draft, 'w');
+  draft.wires.push({ id, from, to, bends: [] });
+  return { ok: true, id };
+}
+
+function roleOf(document: CircuitDocument, ref: PortRef): PortRole | undefined {
+  const component = document.components.find((c) => c.id === ref.component);
+  const type = component ? componentTypeById(component.type) : undefined;
+  return type?.ports.find((p) => p.id === ref.port)?.role;
+}
+
+function freeId(document: CircuitDocument, typeId: string): string {
+  const taken = new Set(document.components.map((c) => c.id));
+  for (let n = 1; ; n += 1) if (!taken.has(`${typeId}-${n}`)) return `${typeId}-${n}`;
+}
+
+function freeConnectionId(document: CircuitDocument, prefix: string): string {
+  const taken = new Set([...document.tubes, ...document.wires].map((c) => c.id));
+  for (let n = 1; ; n += 1) if (!taken.has(`${prefix}${n}`)) return `${prefix}${n}`;
+}
