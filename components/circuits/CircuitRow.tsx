@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { ChangeTime } from './ChangeTime';
 import type { CircuitSummary } from './fetch-circuits';
 
@@ -7,7 +8,9 @@ export function CircuitRow({ circuit }: { circuit: CircuitSummary }) {
   return (
     <tr data-testid="circuit-row" className="border-t border-rule align-top hover:bg-paper-sunk/60">
       <th scope="row" className="px-4 py-3 text-left font-normal">
-        <span className="block font-medium text-ink">{circuit.title}</span>
+        <Link href={`/circuits/${circuit.id}`} className="block font-medium text-ink underline-offset-2 hover:text-accent-strong hover:underline" data-testid="circuit-link">
+          {circuit.title}
+        </Link>
         {circuit.description ? (
           <span className="mt-0.5 line-clamp-2 text-xs text-ink-soft">{circuit.description}</span>
         ) : null}

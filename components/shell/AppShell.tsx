@@ -5,10 +5,12 @@ import { ShellHeader } from './ShellHeader';
 type AppShellProps = {
   userName: string;
   children: ReactNode;
+  /** `full` gives the page the whole window width (the circuit editor); pages read best at `page`. */
+  width?: 'page' | 'full';
 };
 
 /** The frame around every signed-in page: header with workspace and account, caution in the footer. */
-export function AppShell({ userName, children }: AppShellProps) {
+export function AppShell({ userName, children, width = 'page' }: AppShellProps) {
   return (
     <div className="flex min-h-dvh flex-col">
       <a
@@ -18,7 +20,7 @@ export function AppShell({ userName, children }: AppShellProps) {
         Skip to content
       </a>
       <ShellHeader userName={userName} />
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6 sm:py-8">
+      <main id="main" className={`mx-auto w-full flex-1 ${width === 'full' ? 'px-2 py-3 sm:px-4' : 'max-w-6xl px-4 py-6 sm:px-6 sm:py-8'}`}>
         {children}
       </main>
       <footer className="border-t border-rule bg-paper-raised">

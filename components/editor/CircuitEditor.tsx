@@ -1,0 +1,327 @@
+'use client';
+
+import '@xyflow/react/dist/style.css';
+import {
+  Background,
+  BackgroundVariant,
+  ConnectionMode,
+  Controls,
+  MiniMap,
+  ReactFlow,
+  ReactFlowProvider,
+  useReactFlow,
+  type Connection,
+  type EdgeChange,
+  type NodeChange,
+  type NodeTypes,
+} from '@xyflow/react';
+import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } from 'react';
+import { useStore } from 'zustand';
+import type { CircuitDocument } from '@/engine/document/schema';
+import { symbolGeometry } from '@/components/symbols/geometry';
+import { ComponentNode } from './ComponentNode';
+import { addComponent, checkConnection, connect, removeItems } from './document-commands';
+import { createEditorStore, type EditorStore } from './editor-store';
+import { EditorToolbar } from './EditorToolbar';
+import { edgesOf, nodesOf, type ComponentFlowNode, type ConnectionFlowEdge } from './flow-mapping';
+import { clearDraft, readDraft, writeDraft } from './local-draft';
+import { Palette, PALETTE_DRAG_TYPE } from './Palette';
+import { SaveRevisionForm, type SavedRevision } from './SaveRevisionForm';
+
+const NODE_TYPES: NodeTypes = { component: ComponentNode };
+const GRID = 10;
+
+export interface EditorCircuit {
+  id: string;
+  title: string;
+  lockVersion: number;
+  revisionNumber: number;
+  document: CircuitDocument;
+}
+
+/**
+ * The circuit editor: palette, canvas and toolbar around one editor store. The canvas is a
+ * controlled view of the document; every edit goes through the store, so undo covers it.
+ * Without edit rights the same canvas is shown read-only.
+ */
+export function CircuitEditor({ circuit, canEdit, onReloadLatest }: { circuit: EditorCircuit; canEdit: boolean; onReloadLatest: () => void }) {
+  // A draft left by a reload of this same revision comes back (the editor mounts in the browser only, once the circuit has loaded).
+  const [start] = useState(() => {
+    const draft = canEdit && typeof window !== 'undefined' ? readDraft(window.localStorage, circuit.id, circuit.lockVersion) : null;
+    const store = createEditorStore(draft?.document ?? circuit.document);
+    if (draft) store.setState({ changesSinceSave: 1 });
+    return { store, restoredAt: draft?.savedAt ?? null };
+  });
+  return (
+    <ReactFlowProvider>
+      <EditorFrame store={start.store} restoredFrom={start.restoredAt} circuit={circuit} canEdit={canEdit} onReloadLatest={onReloadLatest} />
+    </ReactFlowProvider>
+  );
+}
+
+function EditorFrame({
+  store,
+  restoredFrom,
+  circuit,
+  canEdit,
+  onReloadLatest,
+}: {
+  store: EditorStore;
+  restoredFrom: string | null;
+  circuit: EditorCircuit;
+  canEdit: boolean;
+  onReloadLatest: () => void;
+}) {
+  const document = useStore(store, (s) => s.document);
+  const selection = useStore(store, (s) => s.selection);
+  const changes = useStore(store, (s) => s.changesSinceSave);
+  const canUndo = useStore(store, (s) => s.past.length > 0);
+  const canRedo = useStore(store, (s) => s.future.length > 0);
+  const flow = useReactFlow<ComponentFlowNode, ConnectionFlowEdge>();
+  const canvasRef = useRef<HTMLDivElement>(null);
+  const [saved, setSaved] = useState<{ lockVersion: number; number: number }>({ lockVersion: circuit.lockVersion, number: circuit.revisionNumber });
+  const [saving, setSaving] = useState(false);
+  const [notice, setNotice] = useState<string | null>(null);
+  const [restoredAt, setRestoredAt] = useState<string | null>(restoredFrom);
+  const [paletteOpen, setPaletteOpen] = useState(false);
+  // Fit a drawing that has parts when it opens; an empty one starts at 100 % (fitting its first part would zoom far in).
+  const [fitOnOpen] = useState(() => document.components.length > 0);
+
+  useEffect(() => {
+    if (!canEdit || changes === 0) return;
+    writeDraft(window.localStorage, circuit.id, { baseLockVersion: saved.lockVersion, savedAt: new Date().toISOString(), document });
+  }, [canEdit, changes, circuit.id, document, saved.lockVersion]);
+
+  const nodes = useMemo(() => nodesOf(document, selection), [document, selection]);
+  const edges = useMemo(() => edgesOf(document, selection), [document, selection]);
+
+  const onNodesChange = useCallback(
+    (changes: NodeChange<ComponentFlowNode>[]) => {
+      const moves = changes.flatMap((c) => (c.type === 'position' && c.position && c.dragging ? [{ id: c.id, x: c.position.x, y: c.position.y }] : []));
+      if (moves.length) store.getState().dragTo(moves);
+      const picks = changes.flatMap((c) => (c.type === 'select' ? [c] : []));
+      if (picks.length === 0) return;
+      const { selection: current, select } = store.getState();
+      const components = new Set(current.components);
+      for (const c of picks) {
+        if (c.selected) components.add(c.id);
+        else components.delete(c.id);
+      }
+      select({ ...current, components: [...components] });
+    },
+    [store],
+  );
+
+  const onEdgesChange = useCallback(
+    (changes: EdgeChange<ConnectionFlowEdge>[]) => {
+      const picks = changes.flatMap((c) => (c.type === 'select' ? [c] : []));
+      if (picks.length === 0) return;
+      const { selection: current, select, document: doc } = store.getState();
+      const tubes = new Set(current.tubes);
+      const wires = new Set(current.wires);
+      for (const c of picks) {
+        const list = doc.tubes.some((t) => t.id === c.id) ? tubes : wires;
+        if (c.selected) list.add(c.id);
+        else list.delete(c.id);
+      }
+      select({ components: current.components, tubes: [...tubes], wires: [...wires] });
+    },
+    [store],
+  );
+
+  const portsOf = (c: Connection | ConnectionFlowEdge) =>
+    c.sourceHandle && c.targetHandle ? { a: { component: c.source, port: c.sourceHandle }, b: { component: c.target, port: c.targetHandle } } : null;
+
+  const isValidConnection = useCallback(
+    (c: Connection | ConnectionFlowEdge) => {
+      const ends = portsOf(c);
+      return ends !== null && checkConnection(store.getState().document, ends.a, ends.b).ok;
+    },
+    [store],
+  );
+
+  const onConnect = useCallback(
+    (c: Connection) => {
+      const ends = portsOf(c);
+      if (!ends) return;
+      const result = store.getState().edit('Connect', (d) => connect(d, ends.a, ends.b));
+      setNotice(result.ok ? null : result.reason);
+    },
+    [store],
+  );
+
+  const removeSelected = useCallback(() => {
+    const { selection: picked } = store.getState();
+    if (picked.components.length + picked.tubes.length + picked.wires.length === 0) return;
+    store.getState().edit('Delete', (d) => removeItems(d, picked));
+    store.getState().select({ components: [], tubes: [], wires: [] });
+  }, [store]);
+
+  const addAt = useCallback(
+    (typeId: string, centre: { x: number; y: number }) => {
+      // The part lands centred on the point, on the grid.
+      const { width, height } = symbolGeometry(typeId);
+      const snapped = { x: Math.round((centre.x - width / 2) / GRID) * GRID, y: Math.round((centre.y - height / 2) / GRID) * GRID };
+      const id = store.getState().edit('Add', (d) => addComponent(d, typeId, snapped));
+      store.getState().select({ components: [id], tubes: [], wires: [] });
+      setPaletteOpen(false);
+    },
+    [store],
+  );
+
+  const addAtCentre = useCallback(
+    (typeId: string) => {
+      const box = canvasRef.current?.getBoundingClientRect();
+      const centre = box ? flow.screenToFlowPosition({ x: box.left + box.width / 2, y: box.top + box.height / 2 }) : { x: 0, y: 0 };
+      addAt(typeId, centre);
+    },
+    [addAt, flow],
+  );
+
+  const onDrop = useCallback(
+    (event: DragEvent) => {
+      const typeId = event.dataTransfer.getData(PALETTE_DRAG_TYPE);
+      if (!typeId || !canEdit) return;
+      event.preventDefault();
+      addAt(typeId, flow.screenToFlowPosition({ x: event.clientX, y: event.clientY }));
+    },
+    [addAt, canEdit, flow],
+  );
+
+  // Undo and redo from the keyboard, except while typing in a field.
+  useEffect(() => {
+    if (!canEdit) return;
+    const onKey = (event: KeyboardEvent) => {
+      const target = event.target as HTMLElement | null;
+      if (target?.closest('input, textarea, select, [contenteditable="true"]')) return;
+      if (!(event.ctrlKey || event.metaKey)) return;
+      const key = event.key.toLowerCase();
+      if (key === 'z' && !event.shiftKey) store.getState().undo();
+      else if ((key === 'z' && event.shiftKey) || key === 'y') store.getState().redo();
+      else return;
+      event.preventDefault();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [canEdit, store]);
+
+  const onSaved = (revision: SavedRevision) => {
+    setSaved({ lockVersion: revision.lockVersion, number: revision.number });
+    store.getState().markSaved();
+    clearDraft(window.localStorage, circuit.id);
+    setRestoredAt(null);
+    setSaving(false);
+    setNotice(`Saved as revision ${revision.number}.`);
+  };
+
+  const summary = `${document.components.length} components · ${document.tubes.length} tubes · ${document.wires.length} wires`;
+
+  return (
+    <div className="flex h-[calc(100dvh-11rem)] min-h-[28rem] flex-col overflow-hidden rounded-lg border border-rule bg-paper-raised" data-testid="circuit-editor">
+      <EditorToolbar
+        title={circuit.title}
+        revisionNumber={saved.number}
+        unsaved={changes > 0}
+        canEdit={canEdit}
+        canUndo={canUndo}
+        canRedo={canRedo}
+        hasSelection={selection.components.length + selection.tubes.length + selection.wires.length > 0}
+        onUndo={() => store.getState().undo()}
+        onRedo={() => store.getState().redo()}
+        onDelete={removeSelected}
+        onFit={() => void flow.fitView({ padding: 0.2, duration: 200 })}
+        onSave={() => setSaving(true)}
+        onTogglePalette={() => setPaletteOpen((open) => !open)}
+        paletteOpen={paletteOpen}
+      />
+      {restoredAt ? (
+        <div className="flex flex-wrap items-center gap-2 border-b border-rule bg-caution-soft px-3 py-1.5 text-sm text-ink" role="status" data-testid="draft-restored">
+          Unsaved changes from {new Date(restoredAt).toLocaleString()} were restored.
+          <button
+            type="button"
+            className="font-medium text-accent underline"
+            onClick={() => {
+              clearDraft(window.localStorage, circuit.id);
+              store.getState().load(circuit.document);
+              setRestoredAt(null);
+            }}
+          >
+            Discard them
+          </button>
+        </div>
+      ) : null}
+      {saving ? (
+        <SaveRevisionForm
+          circuitId={circuit.id}
+          document={document}
+          expectedLockVersion={saved.lockVersion}
+          onSaved={onSaved}
+          onCancel={() => setSaving(false)}
+          onReloadLatest={onReloadLatest}
+        />
+      ) : null}
+      {notice ? (
+        <p className="border-b border-rule px-3 py-1.5 text-sm text-ink-soft" role="status" data-testid="editor-notice">
+          {notice}
+        </p>
+      ) : null}
+      {!canEdit ? (
+        <p className="border-b border-rule px-3 py-1.5 text-sm text-ink-soft" data-testid="read-only-note">
+          Read-only: your role in this workspace can look at this circuit but not change it.
+        </p>
+      ) : null}
+      <div className="relative flex min-h-0 flex-1">
+        {canEdit ? (
+          <aside
+            className={`${paletteOpen ? 'absolute inset-y-0 left-0 z-10 flex shadow-lg' : 'hidden'} w-64 shrink-0 border-r border-rule bg-paper-raised md:relative md:flex md:shadow-none`}
+            data-testid="palette"
+          >
+            <Palette onAdd={addAtCentre} />
+          </aside>
+        ) : null}
+        <div ref={canvasRef} className="airproof-canvas relative min-w-0 flex-1" onDragOver={(e) => e.preventDefault()} onDrop={onDrop} data-testid="canvas">
+          <ReactFlow<ComponentFlowNode, ConnectionFlowEdge>
+            nodes={nodes}
+            edges={edges}
+            nodeTypes={NODE_TYPES}
+            onNodesChange={onNodesChange}
+            onEdgesChange={onEdgesChange}
+            onNodeDragStop={() => store.getState().endDrag()}
+            onConnect={onConnect}
+            isValidConnection={isValidConnection}
+            onDelete={removeSelected}
+            connectionMode={ConnectionMode.Loose}
+            nodesDraggable={canEdit}
+            nodesConnectable={canEdit}
+            deleteKeyCode={canEdit ? ['Delete', 'Backspace'] : null}
+            multiSelectionKeyCode={['Shift', 'Meta', 'Control']}
+            selectionOnDrag={canEdit}
+            panOnDrag={canEdit ? [1, 2] : true}
+            panOnScroll
+            snapToGrid
+            snapGrid={[GRID, GRID]}
+            fitView={fitOnOpen}
+            fitViewOptions={{ padding: 0.2, maxZoom: 1.5 }}
+            defaultViewport={{ x: 40, y: 40, zoom: 1 }}
+            minZoom={0.2}
+            maxZoom={4}
+            proOptions={{ hideAttribution: true }}
+          >
+            <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} />
+            <Controls showInteractive={false} position="bottom-right" />
+            <MiniMap pannable zoomable position="bottom-left" className="!hidden sm:!block" ariaLabel="Overview of the drawing" />
+          </ReactFlow>
+          {document.components.length === 0 ? (
+            <div className="pointer-events-none absolute inset-0 flex items-center justify-center p-6 text-center text-sm text-ink-soft">
+              {canEdit ? 'Empty drawing: pick a part from the list, or drag it here.' : 'This revision has no components yet.'}
+            </div>
+          ) : null}
+        </div>
+      </div>
+      <footer className="flex flex-wrap items-center justify-between gap-2 border-t border-rule px-3 py-1.5 text-xs text-ink-soft">
+        <span className="value" data-testid="editor-summary">{summary}</span>
+        <span>Drawn to ISO 1219-1 semantics · port numbers per ISO 11727</span>
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,58 @@
+import type { Edge, Node } from '@xyflow/react';
+import { symbolGeometry } from '@/components/symbols/geometry';
+import type { CircuitComponent, CircuitDocument } from '@/engine/document/schema';
+import type { ItemSelection } from './document-commands';
+
+export type ComponentNodeData = { component: CircuitComponent };
+export type ComponentFlowNode = Node<ComponentNodeData, 'component'>;
+export type ConnectionEdgeData = { kind: 'tube' | 'wire' };
+export type ConnectionFlowEdge = Edge<ConnectionEdgeData>;
+
+/**
+ * The canvas is a view of the document: one node per component (sized by its symbol, so the
+ * canvas needs no measuring pass) and one edge per tube or wire, between the ports' handles.
+ */
+export function nodesOf(document: CircuitDocument, selection: ItemSelection): ComponentFlowNode[] {
+  const selected = new Set(selection.components);
+  return document.components.map((component) => {
+    const geometry = symbolGeometry(component.type);
+    return {
+      id: component.id,
+      type: 'component',
+      position: component.position,
+      width: geometry.width,
+      height: geometry.height,
+      selected: selected.has(component.id),
+      data: { component },
+    };
+  });
+}
+
+export function edgesOf(document: CircuitDocument, selection: ItemSelection): ConnectionFlowEdge[] {
+  const tubes = new Set(selection.tubes);
+  const wires = new Set(selection.wires);
+  return [
+    ...document.tubes.map((t) => ({
+      id: t.id,
+      source: t.from.component,
+      sourceHandle: t.from.port,
+      target: t.to.component,
+      targetHandle: t.to.port,
+      type: 'smoothstep',
+      className: 'airproof-tube',
+      selected: tubes.has(t.id),
+      data: { kind: 'tube' as const },
+    })),
+    ...document.wires.map((w) => ({
+      id: w.id,
+      source: w.from.component,
+      sourceHandle: w.from.port,
+      target: w.to.component,
+      targetHandle: w.to.port,
+      type: 'step',
+      className: 'airproof-wire',
+      selected: wires.has(w.id),
+      data: { kind: 'wire' as const },
+    })),
+  ];
+}

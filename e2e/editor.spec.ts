@@ -1,0 +1,85 @@
+import { expect, test } from '@playwright/test';
+import { EditorPage } from './pages/editor-page';
+import { SignInPage } from './pages/sign-in-page';
+import { DEMO_PASSWORD, demoUser } from './support/demo';
+
+test('an engineer draws a circuit, undoes and redoes, saves a revision and finds it after a reload', async ({ page, browser }) => {
+  const signIn = new SignInPage(page);
+  await signIn.open('/circuits');
+  await signIn.signIn(demoUser('engineer').email, DEMO_PASSWORD);
+  await expect(page).toHaveURL(/\/circuits$/);
+
+  const title = `Editor walk-through ${Date.now()}`;
+  await page.getByTestId('new-circuit').click();
+  await page.getByTestId('new-circuit-title').fill(title);
+  await page.getByTestId('new-circuit-submit').click();
+  await page.getByTestId('circuit-link').filter({ hasText: title }).click();
+
+  const editor = new EditorPage(page);
+  await expect(editor.editor()).toBeVisible();
+  await expect(editor.revisionState()).toContainText('Revision 1');
+  await expect(editor.summary()).toHaveText('0 components · 0 tubes · 0 wires');
+
+  await editor.place('air-supply', { x: 420, y: 460 });
+  await editor.place('valve-5-2', { x: 520, y: 300 });
+  await editor.place('cylinder-double-acting', { x: 520, y: 120 });
+  await expect(editor.summary()).toHaveText('3 components · 0 tubes · 0 wires');
+  await expect(editor.component('0Z1')).toBeVisible();
+  await expect(editor.component('1V1')).toBeVisible();
+  await expect(editor.component('1A1')).toBeVisible();
+
+  await editor.join(editor.port('0Z1', '2'), editor.port('1V1', '1'));
+  await editor.join(editor.port('1V1', '4'), editor.port('1A1', 'A'));
+  await editor.join(editor.port('1V1', '2'), editor.port('1A1', 'B'));
+  await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+
+  // Undo takes back the last tube, redo brings it again; the keyboard does the same.
+  await page.getByTestId('undo').click();
+  await expect(editor.summary()).toHaveText('3 components · 2 tubes · 0 wires');
+  await page.getByTestId('redo').click();
+  await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+  await editor.canvas().click({ position: { x: 700, y: 40 } });
+  await page.keyboard.press('Control+z');
+  await expect(editor.summary()).toHaveText('3 components · 2 tubes · 0 wires');
+  await page.keyboard.press('Control+Shift+z');
+  await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+  await expect(editor.revisionState()).toContainText('unsaved changes');
+
+  await page.screenshot({ path: 'test-results/screens/editor-1440.png' });
+  await editor.saveRevision('Supply, 5/2 valve and cylinder');
+  await expect(editor.revisionState()).toHaveText(/Revision 2$/);
+
+  await page.reload();
+  await expect(editor.revisionState()).toHaveText(/Revision 2$/);
+  await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+
+  // Unsaved work survives a reload of the same revision.
+  await editor.place('throttle', { x: 200, y: 200 });
+  await expect(editor.summary()).toHaveText('4 components · 3 tubes · 0 wires');
+  await page.reload();
+  await expect(page.getByTestId('draft-restored')).toBeVisible();
+  await expect(editor.summary()).toHaveText('4 components · 3 tubes · 0 wires');
+  await page.getByRole('button', { name: 'Discard them' }).click();
+  await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+
+  await page.setViewportSize({ width: 390, height: 844 });
+  await expect(editor.editor()).toBeVisible();
+  await page.getByTestId('fit').click();
+  await expect(editor.component('1V1')).toBeInViewport();
+  await page.screenshot({ path: 'test-results/screens/editor-390.png' });
+  const circuitUrl = page.url();
+
+  // A reviewer sees the same drawing, read-only.
+  const reviewerContext = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+  const reviewer = await reviewerContext.newPage();
+  const reviewerSignIn = new SignInPage(reviewer);
+  await reviewerSignIn.open(new URL(circuitUrl).pathname);
+  await reviewerSignIn.signIn(demoUser('reviewer').email, DEMO_PASSWORD);
+  const reviewerEditor = new EditorPage(reviewer);
+  await expect(reviewerEditor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+  await expect(reviewer.getByTestId('read-only-note')).toBeVisible();
+  await expect(reviewer.getByTestId('palette')).toHaveCount(0);
+  await expect(reviewer.getByTestId('save-revision')).toHaveCount(0);
+  await reviewer.screenshot({ path: 'test-results/screens/editor-reviewer-1440.png' });
+  await reviewerContext.close();
+});
