@@ -27,6 +27,12 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await expect(editor.component('0Z1')).toBeVisible();
   await expect(editor.component('1V1')).toBeVisible();
   await expect(editor.component('1A1')).toBeVisible();
+  // Nothing joined yet: the checks list the open ports, and picking one selects its part.
+  await expect(page.getByTestId('checks-summary')).toContainText('warning');
+  await page.getByTestId('checks-toggle').click();
+  await page.getByTestId('check-item').filter({ hasText: '1A1' }).first().click();
+  await expect(page.locator('.react-flow__node.selected [data-tag="1A1"]')).toBeVisible();
+  await page.getByTestId('checks-toggle').click();
 
   await editor.join(editor.port('0Z1', '2'), editor.port('1V1', '1'));
   await editor.join(editor.port('1V1', '4'), editor.port('1A1', 'A'));
@@ -61,6 +67,22 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await expect(editor.summary()).toHaveText('4 components · 3 tubes · 0 wires');
   await page.getByRole('button', { name: 'Discard them' }).click();
   await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+
+  // Run it: hold the 5/2 valve's push-button on the drawing and watch the piston reach its end.
+  await page.getByTestId('run-start').click();
+  await expect.poll(async () => Number(await page.getByTestId('run-time').getAttribute('data-t'))).toBeGreaterThan(0.2);
+  await expect(page.getByTestId('pressure-legend')).toBeVisible();
+  const valve = await editor.component('1V1').boundingBox();
+  if (!valve) throw new Error('valve not on screen');
+  await page.mouse.move(valve.x + valve.width / 2, valve.y + valve.height / 2);
+  await page.mouse.down();
+  await expect.poll(async () => Number(await editor.component('1A1').getAttribute('data-extension')), { timeout: 15_000 }).toBeGreaterThan(0.999);
+  await expect(editor.component('1V1')).toHaveAttribute('data-active-position', '0');
+  await page.screenshot({ path: 'test-results/screens/editor-run-1440.png' });
+  await page.mouse.up();
+  await expect.poll(async () => Number(await editor.component('1A1').getAttribute('data-extension')), { timeout: 15_000 }).toBeLessThan(0.001);
+  await page.getByTestId('run-stop').click();
+  await expect(page.getByTestId('pressure-legend')).toHaveCount(0);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await expect(editor.editor()).toBeVisible();

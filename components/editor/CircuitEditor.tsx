@@ -18,8 +18,17 @@ import {
 import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } from 'react';
 import { useStore } from 'zustand';
 import type { CircuitDocument } from '@/engine/document/schema';
+import type { Diagnostic } from '@/engine/solver/model';
 import { symbolGeometry } from '@/components/symbols/geometry';
+import { ChecksPanel } from './ChecksPanel';
+import { PressureLegend } from './run/PressureLegend';
+import { rampColour, rampTopBar } from './run/pressure-ramp';
+import { RunBar } from './run/RunBar';
+import { RunContext, type RunView } from './run/run-context';
+import { frameAt, manualOperation } from './run/run-frame';
+import { useLiveRun } from './run/use-live-run';
 import { ComponentNode } from './ComponentNode';
+import { checksOf, problemsByItem } from './diagnostics';
 import { addComponent, checkConnection, connect, removeItems } from './document-commands';
 import { createEditorStore, type EditorStore } from './editor-store';
 import { EditorToolbar } from './EditorToolbar';
@@ -92,14 +101,63 @@ function EditorFrame({
     writeDraft(window.localStorage, circuit.id, { baseLockVersion: saved.lockVersion, savedAt: new Date().toISOString(), document });
   }, [canEdit, changes, circuit.id, document, saved.lockVersion]);
 
-  const nodes = useMemo(() => nodesOf(document, selection), [document, selection]);
-  const edges = useMemo(() => edgesOf(document, selection), [document, selection]);
+  const checks = useMemo(() => checksOf(document), [document]);
+  const problems = useMemo(() => problemsByItem(checks), [checks]);
+  const run = useLiveRun();
+  const running = run.status !== 'stopped';
+  const editable = canEdit && !running;
+  const frame = useMemo(() => (running && run.trace ? frameAt(run.trace, document, run.t) : null), [document, run.t, run.trace, running]);
+  const topBar = rampTopBar(frame?.highestBar ?? 0);
+  const nodes = useMemo(() => nodesOf(document, selection, problems), [document, selection, problems]);
+  const edges = useMemo(() => {
+    const drawn = edgesOf(document, running ? { components: [], tubes: [], wires: [] } : selection, problems);
+    if (!frame) return drawn;
+    // During a run each tube takes the colour of its pressure.
+    return drawn.map((e) => {
+      const bar = frame.tubeBar.get(e.id);
+      return bar === undefined ? e : { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 }, data: e.data };
+    });
+  }, [document, frame, problems, running, selection, topBar]);
+
+  const pressed = useRef(new Set<string>());
+  const runView = useMemo<RunView>(
+    () => ({
+      running,
+      states: frame?.components ?? new Map(),
+      actuate: (componentId, phase) => {
+        const component = document.components.find((c) => c.id === componentId);
+        const operation = component ? manualOperation(component) : null;
+        if (!operation || run.status === 'ended' || run.status === 'failed') return;
+        if (operation === 'hold') {
+          if (phase === 'down' && !pressed.current.has(componentId)) {
+            pressed.current.add(componentId);
+            run.act(componentId, 'press');
+          } else if (phase === 'up' && pressed.current.delete(componentId)) run.act(componentId, 'release');
+        } else if (phase === 'down') {
+          const struck = frame?.components.get(componentId)?.state !== undefined;
+          run.act(componentId, operation === 'emergency-stop' && !struck ? 'press' : 'toggle');
+        }
+      },
+    }),
+    [document.components, frame, run, running],
+  );
+
+  const pickCheck = useCallback(
+    (check: Diagnostic) => {
+      const { select } = store.getState();
+      select({ components: check.componentId ? [check.componentId] : [], tubes: check.tubeId ? [check.tubeId] : [], wires: check.wireId ? [check.wireId] : [] });
+      const focus = check.componentId ?? [check.tubeId, check.wireId].map((id) => [...document.tubes, ...document.wires].find((c) => c.id === id)?.from.component).find(Boolean);
+      if (focus) void flow.fitView({ nodes: [{ id: focus }], padding: 1.2, maxZoom: 1.5, duration: 200 });
+    },
+    [document, flow, store],
+  );
 
   const onNodesChange = useCallback(
     (changes: NodeChange<ComponentFlowNode>[]) => {
       const moves = changes.flatMap((c) => (c.type === 'position' && c.position && c.dragging ? [{ id: c.id, x: c.position.x, y: c.position.y }] : []));
       if (moves.length) store.getState().dragTo(moves);
-      const picks = changes.flatMap((c) => (c.type === 'select' ? [c] : []));
+      // During a run a click works the part instead of selecting it.
+      const picks = running ? [] : changes.flatMap((c) => (c.type === 'select' ? [c] : []));
       if (picks.length === 0) return;
       const { selection: current, select } = store.getState();
       const components = new Set(current.components);
@@ -109,12 +167,12 @@ function EditorFrame({
       }
       select({ ...current, components: [...components] });
     },
-    [store],
+    [running, store],
   );
 
   const onEdgesChange = useCallback(
     (changes: EdgeChange<ConnectionFlowEdge>[]) => {
-      const picks = changes.flatMap((c) => (c.type === 'select' ? [c] : []));
+      const picks = running ? [] : changes.flatMap((c) => (c.type === 'select' ? [c] : []));
       if (picks.length === 0) return;
       const { selection: current, select, document: doc } = store.getState();
       const tubes = new Set(current.tubes);
@@ -126,7 +184,7 @@ function EditorFrame({
       }
       select({ components: current.components, tubes: [...tubes], wires: [...wires] });
     },
-    [store],
+    [running, store],
   );
 
   const portsOf = (c: Connection | ConnectionFlowEdge) =>
@@ -188,9 +246,9 @@ function EditorFrame({
     [addAt, canEdit, flow],
   );
 
-  // Undo and redo from the keyboard, except while typing in a field.
+  // Undo and redo from the keyboard, except while typing in a field or during a run.
   useEffect(() => {
-    if (!canEdit) return;
+    if (!editable) return;
     const onKey = (event: KeyboardEvent) => {
       const target = event.target as HTMLElement | null;
       if (target?.closest('input, textarea, select, [contenteditable="true"]')) return;
@@ -203,7 +261,7 @@ function EditorFrame({
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [canEdit, store]);
+  }, [editable, store]);
 
   const onSaved = (revision: SavedRevision) => {
     setSaved({ lockVersion: revision.lockVersion, number: revision.number });
@@ -222,7 +280,7 @@ function EditorFrame({
         title={circuit.title}
         revisionNumber={saved.number}
         unsaved={changes > 0}
-        canEdit={canEdit}
+        canEdit={editable}
         canUndo={canUndo}
         canRedo={canRedo}
         hasSelection={selection.components.length + selection.tubes.length + selection.wires.length > 0}
@@ -233,6 +291,25 @@ function EditorFrame({
         onSave={() => setSaving(true)}
         onTogglePalette={() => setPaletteOpen((open) => !open)}
         paletteOpen={paletteOpen}
+      />
+      <RunBar
+        status={run.status}
+        t={run.t}
+        speed={run.speed}
+        message={run.message}
+        computeMs={run.computeMs}
+        canRun={document.components.length > 0 && !checks.some((c) => c.severity === 'error')}
+        onStart={() => {
+          store.getState().select({ components: [], tubes: [], wires: [] });
+          run.start(document);
+        }}
+        onPause={run.pause}
+        onResume={run.resume}
+        onStop={() => {
+          pressed.current.clear();
+          run.reset();
+        }}
+        onSpeed={run.changeSpeed}
       />
       {restoredAt ? (
         <div className="flex flex-wrap items-center gap-2 border-b border-rule bg-caution-soft px-3 py-1.5 text-sm text-ink" role="status" data-testid="draft-restored">
@@ -271,7 +348,7 @@ function EditorFrame({
         </p>
       ) : null}
       <div className="relative flex min-h-0 flex-1">
-        {canEdit ? (
+        {editable ? (
           <aside
             className={`${paletteOpen ? 'absolute inset-y-0 left-0 z-10 flex shadow-lg' : 'hidden'} w-64 shrink-0 border-r border-rule bg-paper-raised md:relative md:flex md:shadow-none`}
             data-testid="palette"
@@ -280,6 +357,7 @@ function EditorFrame({
           </aside>
         ) : null}
         <div ref={canvasRef} className="airproof-canvas relative min-w-0 flex-1" onDragOver={(e) => e.preventDefault()} onDrop={onDrop} data-testid="canvas">
+          <RunContext.Provider value={runView}>
           <ReactFlow<ComponentFlowNode, ConnectionFlowEdge>
             nodes={nodes}
             edges={edges}
@@ -291,12 +369,12 @@ function EditorFrame({
             isValidConnection={isValidConnection}
             onDelete={removeSelected}
             connectionMode={ConnectionMode.Loose}
-            nodesDraggable={canEdit}
-            nodesConnectable={canEdit}
-            deleteKeyCode={canEdit ? ['Delete', 'Backspace'] : null}
+            nodesDraggable={editable}
+            nodesConnectable={editable}
+            deleteKeyCode={editable ? ['Delete', 'Backspace'] : null}
             multiSelectionKeyCode={['Shift', 'Meta', 'Control']}
-            selectionOnDrag={canEdit}
-            panOnDrag={canEdit ? [1, 2] : true}
+            selectionOnDrag={editable}
+            panOnDrag={editable ? [1, 2] : true}
             panOnScroll
             snapToGrid
             snapGrid={[GRID, GRID]}
@@ -311,6 +389,8 @@ function EditorFrame({
             <Controls showInteractive={false} position="bottom-right" />
             <MiniMap pannable zoomable position="bottom-left" className="!hidden sm:!block" ariaLabel="Overview of the drawing" />
           </ReactFlow>
+          </RunContext.Provider>
+          {frame ? <PressureLegend topBar={topBar} /> : null}
           {document.components.length === 0 ? (
             <div className="pointer-events-none absolute inset-0 flex items-center justify-center p-6 text-center text-sm text-ink-soft">
               {canEdit ? 'Empty drawing: pick a part from the list, or drag it here.' : 'This revision has no components yet.'}
@@ -318,6 +398,7 @@ function EditorFrame({
           ) : null}
         </div>
       </div>
+      <ChecksPanel checks={checks} onPick={pickCheck} />
       <footer className="flex flex-wrap items-center justify-between gap-2 border-t border-rule px-3 py-1.5 text-xs text-ink-soft">
         <span className="value" data-testid="editor-summary">{summary}</span>
         <span>Drawn to ISO 1219-1 semantics · port numbers per ISO 11727</span>

@@ -1,9 +1,10 @@
 import type { Edge, Node } from '@xyflow/react';
 import { symbolGeometry } from '@/components/symbols/geometry';
 import type { CircuitComponent, CircuitDocument } from '@/engine/document/schema';
+import type { Severity } from './diagnostics';
 import type { ItemSelection } from './document-commands';
 
-export type ComponentNodeData = { component: CircuitComponent };
+export type ComponentNodeData = { component: CircuitComponent; problem?: Severity };
 export type ComponentFlowNode = Node<ComponentNodeData, 'component'>;
 export type ConnectionEdgeData = { kind: 'tube' | 'wire' };
 export type ConnectionFlowEdge = Edge<ConnectionEdgeData>;
@@ -12,7 +13,7 @@ export type ConnectionFlowEdge = Edge<ConnectionEdgeData>;
  * The canvas is a view of the document: one node per component (sized by its symbol, so the
  * canvas needs no measuring pass) and one edge per tube or wire, between the ports' handles.
  */
-export function nodesOf(document: CircuitDocument, selection: ItemSelection): ComponentFlowNode[] {
+export function nodesOf(document: CircuitDocument, selection: ItemSelection, problems: ReadonlyMap<string, Severity> = new Map()): ComponentFlowNode[] {
   const selected = new Set(selection.components);
   return document.components.map((component) => {
     const geometry = symbolGeometry(component.type);
@@ -23,12 +24,13 @@ export function nodesOf(document: CircuitDocument, selection: ItemSelection): Co
       width: geometry.width,
       height: geometry.height,
       selected: selected.has(component.id),
-      data: { component },
+      data: problems.has(component.id) ? { component, problem: problems.get(component.id) } : { component },
     };
   });
 }
 
-export function edgesOf(document: CircuitDocument, selection: ItemSelection): ConnectionFlowEdge[] {
+export function edgesOf(document: CircuitDocument, selection: ItemSelection, problems: ReadonlyMap<string, Severity> = new Map()): ConnectionFlowEdge[] {
+  const marked = (base: string, id: string) => (problems.has(id) ? `${base} airproof-${problems.get(id)}` : base);
   const tubes = new Set(selection.tubes);
   const wires = new Set(selection.wires);
   return [
@@ -39,7 +41,7 @@ export function edgesOf(document: CircuitDocument, selection: ItemSelection): Co
       target: t.to.component,
       targetHandle: t.to.port,
       type: 'smoothstep',
-      className: 'airproof-tube',
+      className: marked('airproof-tube', t.id),
       selected: tubes.has(t.id),
       data: { kind: 'tube' as const },
     })),
@@ -50,7 +52,7 @@ export function edgesOf(document: CircuitDocument, selection: ItemSelection): Co
       target: w.to.component,
       targetHandle: w.to.port,
       type: 'step',
-      className: 'airproof-wire',
+      className: marked('airproof-wire', w.id),
       selected: wires.has(w.id),
       data: { kind: 'wire' as const },
     })),

@@ -11,20 +11,28 @@ export interface CylinderSymbolProps extends SymbolProps {
   throughRod?: boolean;
   /** End-position cushioning with adjustable needles. */
   cushioned?: boolean;
+  /** Piston travel as a share of the stroke (0 retracted, 1 extended); a run moves piston and rod by it. */
+  extension?: number;
 }
+
+/** How far the drawn piston travels inside the barrel for a full stroke. */
+const DRAWN_STROKE = 76;
 
 /**
  * Linear cylinder, drawn retracted as ISO 1219-1 draws it at rest: barrel, piston, rod, the
  * cap-end port A and the rod-end port B below.
  */
-export function CylinderSymbol({ acting, throughRod = false, cushioned = false, tag, showPortNumbers }: CylinderSymbolProps) {
+export function CylinderSymbol({ acting, throughRod = false, cushioned = false, extension = 0, tag, showPortNumbers }: CylinderSymbolProps) {
   const geometry = symbolGeometry(acting === 'single' ? 'cylinder-single-acting' : 'cylinder-double-acting');
+  const travel = Math.min(1, Math.max(0, extension)) * DRAWN_STROKE;
   return (
     <SymbolBody anchors={geometry.ports} tag={tag} showPortNumbers={showPortNumbers}>
       <rect x={20} y={10} width={100} height={30} />
-      <rect data-part="piston" x={32} y={10} width={4} height={30} fill="currentColor" />
-      <rect x={36} y={23} width={114} height={4} />
-      {throughRod ? <rect data-part="second-rod" x={6} y={23} width={26} height={4} /> : null}
+      <g data-part="moving" transform={travel ? `translate(${travel} 0)` : undefined}>
+        <rect data-part="piston" x={32} y={10} width={4} height={30} fill="currentColor" />
+        <rect x={36} y={23} width={114} height={4} />
+        {throughRod ? <rect data-part="second-rod" x={6} y={23} width={26} height={4} /> : null}
+      </g>
       <path d={acting === 'single' ? 'M30 40 V50' : 'M30 40 V50 M110 40 V50'} />
       {acting === 'single' ? <path data-part="spring" d={springPath(37, 119, 25, 11, 9)} /> : null}
       {cushioned ? (

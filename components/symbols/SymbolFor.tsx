@@ -16,6 +16,8 @@ export interface SymbolForProps {
   energised?: boolean;
   /** A valve's position by index; wins over `state`. */
   activePosition?: number;
+  /** A cylinder's piston travel as a share of its stroke, 0 (retracted) to 1, for drawing a run. */
+  extension?: number;
   className?: string;
 }
 

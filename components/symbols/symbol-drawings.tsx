@@ -39,6 +39,7 @@ export interface DrawingRequest {
   state?: string;
   energised?: boolean;
   activePosition?: number;
+  extension?: number;
 }
 
 /** Draws one type; null when the type lacks what its drawing needs, so the caller falls back. */
@@ -130,9 +131,15 @@ export const DRAWINGS: Readonly<Record<string, Drawing>> = {
   'pressure-sequence-valve': valve(PressureSequenceValveSymbol),
   'time-delay-valve-nc': valve(TimeDelayValveSymbol),
   'time-delay-valve-no': valve(TimeDelayValveSymbol),
-  'cylinder-single-acting': (r) => <CylinderSymbol acting="single" {...labels(r)} />,
+  'cylinder-single-acting': (r) => <CylinderSymbol acting="single" extension={r.extension} {...labels(r)} />,
   'cylinder-double-acting': (r) => (
-    <CylinderSymbol acting="double" throughRod={r.parameters.throughRod === true} cushioned={Number(r.parameters.cushionLength) > 0} {...labels(r)} />
+    <CylinderSymbol
+      acting="double"
+      throughRod={r.parameters.throughRod === true}
+      cushioned={Number(r.parameters.cushionLength) > 0}
+      extension={r.extension}
+      {...labels(r)}
+    />
   ),
   'semi-rotary-actuator': (r) => <SemiRotaryActuatorSymbol {...labels(r)} />,
   'dc-supply': (r) => <DcSupplySymbol voltage={typeof r.parameters.voltage === 'number' ? r.parameters.voltage : undefined} {...labels(r)} />,

@@ -33,4 +33,12 @@ describe('the canvas as a view of the document', () => {
       expect.objectContaining({ id: 'w1', source: ids[2], sourceHandle: 'L+', target: ids[3], targetHandle: 'A1', type: 'step', className: 'airproof-wire', selected: true, data: { kind: 'wire' } }),
     ]);
   });
+
+  it('marks the components, tubes and wires the checks found something on', () => {
+    const problems = new Map([[ids[0]!, 'error' as const], ['w1', 'warning' as const]]);
+    const nodes = nodesOf(document, { components: [], tubes: [], wires: [] }, problems);
+    expect(nodes.map((n) => n.data.problem)).toEqual(['error', undefined, undefined, undefined]);
+    const edges = edgesOf(document, { components: [], tubes: [], wires: [] }, problems);
+    expect(edges.map((e) => e.className)).toEqual(['airproof-tube', 'airproof-wire airproof-warning']);
+  });
 });

@@ -141,6 +141,15 @@ describe('SymbolFor', () => {
     expect(renderToStaticMarkup(<SymbolFor typeId="relay-coil" />)).not.toContain('data-delay');
   });
 
+  it('moves piston and rod by the share of the stroke a run gives, within the barrel', () => {
+    const moving = (extension?: number) => /data-part="moving"(?: transform="translate\(([\d.]+) 0\)")?/.exec(renderToStaticMarkup(<SymbolFor typeId="cylinder-double-acting" extension={extension} />))?.[1];
+    expect(moving()).toBeUndefined();
+    expect(moving(0)).toBeUndefined();
+    expect(Number(moving(0.5))).toBeCloseTo(38, 6);
+    expect(Number(moving(1))).toBeCloseTo(76, 6);
+    expect(Number(moving(3))).toBeCloseTo(76, 6);
+  });
+
   it('draws a through rod and cushions only when the cylinder has them', () => {
     const plain = renderToStaticMarkup(<SymbolFor typeId="cylinder-double-acting" />);
     expect(plain).not.toContain('second-rod');

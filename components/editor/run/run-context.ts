@@ -1,0 +1,14 @@
+'use client';
+
+import { createContext } from 'react';
+import type { ComponentRunState } from './run-frame';
+
+/** What the canvas's parts need of a run in progress: their states now, and a way to work a button. */
+export interface RunView {
+  running: boolean;
+  states: ReadonlyMap<string, ComponentRunState>;
+  /** A pointer went down on or up from a part during the run. */
+  actuate: (componentId: string, phase: 'down' | 'up') => void;
+}
+
+export const RunContext = createContext<RunView>({ running: false, states: new Map(), actuate: () => {} });
