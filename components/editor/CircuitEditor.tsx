@@ -25,6 +25,7 @@ import { PressureLegend } from './run/PressureLegend';
 import { rampColour, rampTopBar } from './run/pressure-ramp';
 import { RunBar } from './run/RunBar';
 import { RunContext, type RunView } from './run/run-context';
+import { TracePlot } from './run/TracePlot';
 import { frameAt, manualOperation } from './run/run-frame';
 import { useLiveRun } from './run/use-live-run';
 import { ComponentNode } from './ComponentNode';
@@ -398,6 +399,7 @@ function EditorFrame({
           ) : null}
         </div>
       </div>
+      {running && run.trace ? <TracePlot trace={run.trace} document={document} t={run.t} /> : null}
       <ChecksPanel checks={checks} onPick={pickCheck} />
       <footer className="flex flex-wrap items-center justify-between gap-2 border-t border-rule px-3 py-1.5 text-xs text-ink-soft">
         <span className="value" data-testid="editor-summary">{summary}</span>
