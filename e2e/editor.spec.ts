@@ -51,6 +51,23 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
   await expect(editor.revisionState()).toContainText('unsaved changes');
 
+  // The details form: the cylinder's stroke in mm, checked against its range, undone like any edit.
+  await editor.component('1A1').click();
+  const stroke = page.getByTestId('inspector-field-stroke');
+  await expect(stroke).toHaveValue('100');
+  await stroke.fill('5000');
+  await stroke.press('Enter');
+  await expect(page.getByTestId('inspector-error-stroke')).toContainText('between');
+  await stroke.fill('50');
+  await stroke.press('Enter');
+  await expect(page.getByTestId('inspector-error-stroke')).toHaveCount(0);
+  await page.getByTestId('undo').click();
+  await editor.component('1A1').click();
+  await expect(stroke).toHaveValue('100');
+  await page.getByTestId('redo').click();
+  await editor.component('1A1').click();
+  await expect(stroke).toHaveValue('50');
+
   await page.screenshot({ path: 'test-results/screens/editor-1440.png' });
   await editor.saveRevision('Supply, 5/2 valve and cylinder');
   await expect(editor.revisionState()).toHaveText(/Revision 2$/);

@@ -33,6 +33,7 @@ import { checksOf, problemsByItem } from './diagnostics';
 import { addComponent, checkConnection, connect, removeItems } from './document-commands';
 import { createEditorStore, type EditorStore } from './editor-store';
 import { EditorToolbar } from './EditorToolbar';
+import { Inspector } from './Inspector';
 import { edgesOf, nodesOf, type ComponentFlowNode, type ConnectionFlowEdge } from './flow-mapping';
 import { clearDraft, readDraft, writeDraft } from './local-draft';
 import { Palette, PALETTE_DRAG_TYPE } from './Palette';
@@ -94,6 +95,7 @@ function EditorFrame({
   const [notice, setNotice] = useState<string | null>(null);
   const [restoredAt, setRestoredAt] = useState<string | null>(restoredFrom);
   const [paletteOpen, setPaletteOpen] = useState(false);
+  const [detailsOpen, setDetailsOpen] = useState(false);
   // Fit a drawing that has parts when it opens; an empty one starts at 100 % (fitting its first part would zoom far in).
   const [fitOnOpen] = useState(() => document.components.length > 0);
 
@@ -292,6 +294,8 @@ function EditorFrame({
         onSave={() => setSaving(true)}
         onTogglePalette={() => setPaletteOpen((open) => !open)}
         paletteOpen={paletteOpen}
+        onToggleDetails={() => setDetailsOpen((open) => !open)}
+        detailsOpen={detailsOpen}
       />
       <RunBar
         status={run.status}
@@ -398,6 +402,13 @@ function EditorFrame({
             </div>
           ) : null}
         </div>
+        <aside
+          className={`${detailsOpen ? 'absolute inset-y-0 right-0 z-10 flex shadow-lg' : 'hidden'} w-72 shrink-0 border-l border-rule bg-paper-raised lg:relative lg:flex lg:shadow-none`}
+          aria-label="Details of the selection"
+          data-testid="details"
+        >
+          <Inspector document={document} selection={selection} readOnly={!editable} onEdit={store.getState().edit} />
+        </aside>
       </div>
       {running && run.trace ? <TracePlot trace={run.trace} document={document} t={run.t} /> : null}
       <ChecksPanel checks={checks} onPick={pickCheck} />

@@ -22,12 +22,14 @@ interface EditorToolbarProps {
   canRedo: boolean;
   hasSelection: boolean;
   paletteOpen: boolean;
+  detailsOpen: boolean;
   onUndo: () => void;
   onRedo: () => void;
   onDelete: () => void;
   onFit: () => void;
   onSave: () => void;
   onTogglePalette: () => void;
+  onToggleDetails: () => void;
 }
 
 /** Title, revision state and the drawing commands. Keyboard: Ctrl+Z undo, Ctrl+Shift+Z or Ctrl+Y redo, Delete removes. */
@@ -60,6 +62,9 @@ export function EditorToolbar(props: EditorToolbarProps) {
           </Button>
         </>
       ) : null}
+      <Button size="sm" variant="quiet" className="lg:hidden" onClick={props.onToggleDetails} aria-expanded={props.detailsOpen} data-testid="toggle-details">
+        Details
+      </Button>
       <Button size="sm" variant="quiet" onClick={props.onFit} title="Show the whole drawing" data-testid="fit">
         Fit
       </Button>

@@ -34,7 +34,8 @@ export function TracePlot({ trace, document, t }: { trace: RunTrace; document: C
     const options: uPlot.Options = {
       width: el.clientWidth,
       height: 180,
-      scales: { x: { time: false }, ...Object.fromEntries(units.map((u) => [u, {}])) },
+      // Zero stays on the axis and a flat signal still gets a sensible span (uPlot would centre it on a hair-thin range).
+      scales: { x: { time: false }, ...Object.fromEntries(units.map((u) => [u, { range: (_u: uPlot, min: number, max: number): uPlot.Range.MinMax => [Math.min(0, min), Math.max(1, max)] }])) },
       axes: [
         { label: 'time, s', stroke: '#3b4754' },
         ...units.map((u, i) => ({ label: u, scale: u, side: i === 0 ? 3 : 1, stroke: '#3b4754', grid: { show: i === 0 } })),
