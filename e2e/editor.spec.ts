@@ -99,6 +99,7 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await page.mouse.up();
   await expect.poll(async () => Number(await editor.component('1A1').getAttribute('data-extension')), { timeout: 15_000 }).toBeLessThan(0.001);
   // The plot shows the piston's travel and its port pressures; the whole run downloads as CSV.
+  await page.getByTestId('run-plot').click();
   await expect(page.getByTestId('trace-plot')).toContainText('1A1 position');
   await expect(page.locator('[data-testid="plot-area"] canvas')).toBeVisible();
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('plot-csv').click()]);

@@ -96,6 +96,9 @@ function EditorFrame({
   const [restoredAt, setRestoredAt] = useState<string | null>(restoredFrom);
   const [paletteOpen, setPaletteOpen] = useState(false);
   const [detailsOpen, setDetailsOpen] = useState(false);
+  const [hoveredTube, setHoveredTube] = useState<string | null>(null);
+  // The plot takes room from the drawing, so it opens on request.
+  const [plotOpen, setPlotOpen] = useState(false);
   // Fit a drawing that has parts when it opens; an empty one starts at 100 % (fitting its first part would zoom far in).
   const [fitOnOpen] = useState(() => document.components.length > 0);
 
@@ -118,24 +121,38 @@ function EditorFrame({
     // During a run each tube takes the colour of its pressure.
     return drawn.map((e) => {
       const bar = frame.tubeBar.get(e.id);
-      return bar === undefined ? e : { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 }, data: e.data };
+      if (bar === undefined) return e;
+      const styled = { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 } };
+      // The tube under the pointer says its pressure.
+      return e.id === hoveredTube ? { ...styled, label: `${bar.toFixed(2)} bar (gauge)`, labelBgPadding: [4, 2] as [number, number], labelBgBorderRadius: 3 } : styled;
     });
-  }, [document, frame, problems, running, selection, topBar]);
+  }, [document, frame, hoveredTube, problems, running, selection, topBar]);
 
   const pressed = useRef(new Set<string>());
+  const kept = useRef(new Set<string>());
   const runView = useMemo<RunView>(
     () => ({
       running,
       states: frame?.components ?? new Map(),
-      actuate: (componentId, phase) => {
+      actuate: (componentId, phase, keep = false) => {
         const component = document.components.find((c) => c.id === componentId);
         const operation = component ? manualOperation(component) : null;
         if (!operation || run.status === 'ended' || run.status === 'failed') return;
         if (operation === 'hold') {
-          if (phase === 'down' && !pressed.current.has(componentId)) {
+          // Shift+click keeps a button pressed until the next Shift+click, so two hands' worth can be held at once.
+          if (phase === 'down' && keep) {
+            if (kept.current.delete(componentId)) {
+              pressed.current.delete(componentId);
+              run.act(componentId, 'release');
+            } else if (!pressed.current.has(componentId)) {
+              kept.current.add(componentId);
+              pressed.current.add(componentId);
+              run.act(componentId, 'press');
+            }
+          } else if (phase === 'down' && !pressed.current.has(componentId)) {
             pressed.current.add(componentId);
             run.act(componentId, 'press');
-          } else if (phase === 'up' && pressed.current.delete(componentId)) run.act(componentId, 'release');
+          } else if (phase === 'up' && !kept.current.has(componentId) && pressed.current.delete(componentId)) run.act(componentId, 'release');
         } else if (phase === 'down') {
           const struck = frame?.components.get(componentId)?.state !== undefined;
           run.act(componentId, operation === 'emergency-stop' && !struck ? 'press' : 'toggle');
@@ -312,9 +329,13 @@ function EditorFrame({
         onResume={run.resume}
         onStop={() => {
           pressed.current.clear();
+          kept.current.clear();
           run.reset();
         }}
         onSpeed={run.changeSpeed}
+        onStep={run.step}
+        plotOpen={plotOpen}
+        onTogglePlot={() => setPlotOpen((open) => !open)}
       />
       {restoredAt ? (
         <div className="flex flex-wrap items-center gap-2 border-b border-rule bg-caution-soft px-3 py-1.5 text-sm text-ink" role="status" data-testid="draft-restored">
@@ -371,13 +392,17 @@ function EditorFrame({
             onEdgesChange={onEdgesChange}
             onNodeDragStop={() => store.getState().endDrag()}
             onConnect={onConnect}
+            onEdgeMouseEnter={(_, edge) => setHoveredTube(edge.id)}
+            onEdgeMouseLeave={() => setHoveredTube(null)}
             isValidConnection={isValidConnection}
             onDelete={removeSelected}
             connectionMode={ConnectionMode.Loose}
             nodesDraggable={editable}
             nodesConnectable={editable}
             deleteKeyCode={editable ? ['Delete', 'Backspace'] : null}
-            multiSelectionKeyCode={['Shift', 'Meta', 'Control']}
+            // During a run Shift belongs to the buttons on the drawing (keep pressed), not to selecting.
+            multiSelectionKeyCode={running ? null : ['Shift', 'Meta', 'Control']}
+            selectionKeyCode={running ? null : 'Shift'}
             selectionOnDrag={editable}
             panOnDrag={editable ? [1, 2] : true}
             panOnScroll
@@ -410,7 +435,7 @@ function EditorFrame({
           <Inspector document={document} selection={selection} readOnly={!editable} onEdit={store.getState().edit} />
         </aside>
       </div>
-      {running && run.trace ? <TracePlot trace={run.trace} document={document} t={run.t} /> : null}
+      {running && run.trace && plotOpen ? <TracePlot trace={run.trace} document={document} t={run.t} /> : null}
       <ChecksPanel checks={checks} onPick={pickCheck} />
       <footer className="flex flex-wrap items-center justify-between gap-2 border-t border-rule px-3 py-1.5 text-xs text-ink-soft">
         <span className="value" data-testid="editor-summary">{summary}</span>

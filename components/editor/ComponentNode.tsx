@@ -21,7 +21,7 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
   const workable = run.running && manualOperation(component) !== null;
   return (
     <div
-      onPointerDown={workable ? () => run.actuate(component.id, 'down') : undefined}
+      onPointerDown={workable ? (event) => run.actuate(component.id, 'down', event.shiftKey) : undefined}
       onPointerUp={workable ? () => run.actuate(component.id, 'up') : undefined}
       onPointerLeave={workable ? () => run.actuate(component.id, 'up') : undefined}
       data-workable={workable || undefined}

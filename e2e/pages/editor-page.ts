@@ -51,4 +51,31 @@ export class EditorPage {
     await this.page.getByTestId('save-confirm').click();
     await expect(this.page.getByTestId('editor-notice')).toContainText('Saved as revision');
   }
+
+  /** Opens a circuit by its title through the API (the list pages; tests add circuits of their own). */
+  async openByTitle(title: string): Promise<void> {
+    const list = (await this.page.evaluate(() => fetch('/api/circuits?pageSize=100').then((r) => r.json()))) as { items: Array<{ id: string; title: string }> };
+    const circuit = list.items.find((c) => c.title === title);
+    if (!circuit) throw new Error(`no circuit titled ${title}`);
+    await this.page.goto(`/circuits/${circuit.id}`);
+    await expect(this.editor()).toBeVisible();
+  }
+
+  async runTime(): Promise<number> {
+    return Number(await this.page.getByTestId('run-time').getAttribute('data-t'));
+  }
+
+  async extension(tag: string): Promise<number> {
+    return Number(await this.component(tag).getAttribute('data-extension'));
+  }
+
+  /** Holds the mouse on a part for a while, as a hand on a push-button. */
+  async hold(part: Locator, ms: number): Promise<void> {
+    const box = await part.boundingBox();
+    if (!box) throw new Error('part not on screen');
+    await this.page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await this.page.mouse.down();
+    await this.page.waitForTimeout(ms);
+    await this.page.mouse.up();
+  }
 }

@@ -14,6 +14,9 @@ interface RunBarProps {
   onPause: () => void;
   onResume: () => void;
   onStop: () => void;
+  onStep: () => void;
+  plotOpen: boolean;
+  onTogglePlot: () => void;
   onSpeed: (speed: (typeof RUN_SPEEDS)[number]) => void;
 }
 
@@ -34,9 +37,14 @@ export function RunBar(props: RunBarProps) {
               Pause
             </Button>
           ) : status === 'paused' ? (
-            <Button size="sm" variant="secondary" onClick={props.onResume} data-testid="run-resume">
-              Resume
-            </Button>
+            <>
+              <Button size="sm" variant="secondary" onClick={props.onResume} data-testid="run-resume">
+                Resume
+              </Button>
+              <Button size="sm" variant="quiet" onClick={props.onStep} title="10 ms further" data-testid="run-step">
+                Step
+              </Button>
+            </>
           ) : null}
           <Button size="sm" variant="quiet" onClick={props.onStop} data-testid="run-stop">
             Stop and edit
@@ -53,16 +61,21 @@ export function RunBar(props: RunBarProps) {
         >
           {RUN_SPEEDS.map((s) => (
             <option key={s} value={s}>
-              {s}×
+              {Number.isFinite(s) ? `${s}×` : 'as fast as possible'}
             </option>
           ))}
         </select>
       </label>
+      {active ? (
+        <Button size="sm" variant="quiet" onClick={props.onTogglePlot} aria-expanded={props.plotOpen} data-testid="run-plot">
+          {props.plotOpen ? 'Hide plot' : 'Plot'}
+        </Button>
+      ) : null}
       <output className="value text-ink" data-testid="run-time" data-t={t.toFixed(3)} aria-live="off">
         t = {t.toFixed(2)} s <span className="text-ink-faint">of {RUN_HORIZON_S} s</span>
       </output>
       <span className="text-ink-soft" role="status">
-        {status === 'starting' ? 'Working out the run…' : status === 'ended' ? 'End of the simulated time.' : status === 'failed' ? props.message : active ? 'Click or hold buttons on the drawing to work them.' : null}
+        {status === 'starting' ? 'Working out the run…' : status === 'ended' ? 'End of the simulated time.' : status === 'failed' ? props.message : active ? 'Click or hold buttons on the drawing to work them; Shift+click keeps a button pressed.' : null}
       </span>
       {props.computeMs !== null && active ? <span className="ml-auto text-xs text-ink-faint">computed in {Math.round(props.computeMs)} ms</span> : null}
     </div>

@@ -7,8 +7,8 @@ import type { ComponentRunState } from './run-frame';
 export interface RunView {
   running: boolean;
   states: ReadonlyMap<string, ComponentRunState>;
-  /** A pointer went down on or up from a part during the run. */
-  actuate: (componentId: string, phase: 'down' | 'up') => void;
+  /** A pointer went down on or up from a part during the run; `keep` (Shift held) latches a push-button. */
+  actuate: (componentId: string, phase: 'down' | 'up', keep?: boolean) => void;
 }
 
 export const RunContext = createContext<RunView>({ running: false, states: new Map(), actuate: () => {} });

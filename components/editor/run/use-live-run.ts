@@ -9,7 +9,8 @@ import type { SimulateReply, SimulateRequest } from './run-protocol';
 /** Machine time a run covers, s: a few machine cycles of the circuits people draw here. */
 export const RUN_HORIZON_S = 30;
 const OUTPUT_INTERVAL_S = 0.01;
-export const RUN_SPEEDS = [0.1, 0.25, 0.5, 1, 2, 5, 10] as const;
+/** Playback speeds, machine seconds per wall second; Infinity shows the end of the run at once. */
+export const RUN_SPEEDS = [0.1, 0.25, 0.5, 1, 2, 5, 10, Infinity] as const;
 
 export type RunStatus = 'stopped' | 'starting' | 'playing' | 'paused' | 'ended' | 'failed';
 
@@ -106,6 +107,14 @@ export function useLiveRun() {
     [request],
   );
 
+  /** While paused: one output interval further. */
+  const step = useCallback(() => {
+    const c = clock.current;
+    if (c.playing) return;
+    c.t = Math.min(RUN_HORIZON_S, c.t + OUTPUT_INTERVAL_S);
+    setT(c.t);
+  }, []);
+
   const changeSpeed = useCallback((next: (typeof RUN_SPEEDS)[number]) => {
     clock.current.speed = next;
     setSpeed(next);
@@ -135,5 +144,5 @@ export function useLiveRun() {
 
   useEffect(() => () => worker.current?.terminate(), []);
 
-  return { status, trace, t, speed, message, computeMs, start, pause, resume, reset, act, changeSpeed };
+  return { status, trace, t, speed, message, computeMs, start, pause, resume, reset, act, step, changeSpeed };
 }
