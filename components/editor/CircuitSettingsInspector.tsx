@@ -3,7 +3,7 @@
 import { useMemo } from 'react';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { AMBIENT_PRESSURE_LIMITS, AMBIENT_TEMPERATURE_LIMITS, setSettings, type DocumentEdit } from './inspector-commands';
-import { InspectorField, inspectorValueClassName } from './InspectorField';
+import { DecimalInput, InspectorField } from './InspectorField';
 import { settingsFormSchema, settingsFormValues } from './parameter-form-schema';
 import { useCommittingForm } from './use-committing-form';
 
@@ -27,35 +27,27 @@ export function CircuitSettingsInspector({ settings, readOnly, onEdit }: { setti
           error={form.errorOf('ambientPressure')}
         >
           {(control) => (
-            <input
-              {...control}
-              type="text"
-              inputMode="decimal"
-              autoComplete="off"
-              {...form.textField('ambientPressure', {
+            <DecimalInput
+              control={control}
+              testId="inspector-field-ambient-pressure"
+              field={form.textField('ambientPressure', {
                 schema: settingsFormSchema.shape.ambientPressure,
                 current: settings.ambientPressurePa,
                 apply: (ambientPressurePa) => onEdit('Set ambient pressure', (draft) => setSettings(draft, { ambientPressurePa })),
               })}
-              className={inspectorValueClassName}
-              data-testid="inspector-field-ambient-pressure"
             />
           )}
         </InspectorField>
         <InspectorField name="ambient-temperature" label="Ambient temperature" unit={AMBIENT_TEMPERATURE_LIMITS.unit.unit} error={form.errorOf('ambientTemperature')}>
           {(control) => (
-            <input
-              {...control}
-              type="text"
-              inputMode="decimal"
-              autoComplete="off"
-              {...form.textField('ambientTemperature', {
+            <DecimalInput
+              control={control}
+              testId="inspector-field-ambient-temperature"
+              field={form.textField('ambientTemperature', {
                 schema: settingsFormSchema.shape.ambientTemperature,
                 current: settings.ambientTemperatureK,
                 apply: (ambientTemperatureK) => onEdit('Set ambient temperature', (draft) => setSettings(draft, { ambientTemperatureK })),
               })}
-              className={inspectorValueClassName}
-              data-testid="inspector-field-ambient-temperature"
             />
           )}
         </InspectorField>

@@ -1,4 +1,4 @@
-import { useId, type ReactNode } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type Ref } from 'react';
 
 /** What a control needs so that its label, unit, hint and message are announced with it. */
 export interface InspectorControlProps {
@@ -67,4 +67,17 @@ export function InspectorField({
       ) : null}
     </div>
   );
+}
+
+/** A number typed as text (so a half-typed value or a decimal comma stays as typed until it is committed). */
+export function DecimalInput({
+  control,
+  field,
+  testId,
+}: {
+  control: InspectorControlProps;
+  field: InputHTMLAttributes<HTMLInputElement> & { ref?: Ref<HTMLInputElement> };
+  testId: string;
+}) {
+  return <input {...control} type="text" inputMode="decimal" autoComplete="off" {...field} className={inspectorValueClassName} data-testid={testId} />;
 }

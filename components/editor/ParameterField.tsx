@@ -1,6 +1,6 @@
 import { compactSelectClassName } from '@/components/forms/control-styles';
 import type { ParameterSpec } from '@/engine/components/types';
-import { InspectorField, inspectorValueClassName } from './InspectorField';
+import { DecimalInput, InspectorField, inspectorValueClassName } from './InspectorField';
 import type { ComponentFormValues, FieldValue, ParameterValue } from './parameter-form-schema';
 import { displayUnitFor } from './quantity-units';
 import type { CommitTarget, CommittingForm } from './use-committing-form';
@@ -58,7 +58,7 @@ export function ParameterField({
     <InspectorField name={name} label={spec.label} unit={unit} hint={spec.description} error={error}>
       {(control) => {
         if (spec.kind === 'number') {
-          return <input {...control} type="text" inputMode="decimal" autoComplete="off" {...form.textField(path, target)} className={inspectorValueClassName} data-testid={testId} />;
+          return <DecimalInput control={control} field={form.textField(path, target)} testId={testId} />;
         }
         if (spec.kind === 'choice') {
           return (

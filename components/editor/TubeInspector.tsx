@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import { tubeVolume } from '@/engine/calc/tube';
 import type { CircuitDocument, Tube } from '@/engine/document/schema';
 import { setTube, TUBE_BORE_LIMITS, TUBE_LENGTH_LIMITS, type DocumentEdit } from './inspector-commands';
-import { InspectorField, inspectorValueClassName } from './InspectorField';
+import { DecimalInput, InspectorField } from './InspectorField';
 import { tubeFormSchema, tubeFormValues } from './parameter-form-schema';
 import { formatWithUnit, QUANTITY_UNITS } from './quantity-units';
 import { useCommittingForm } from './use-committing-form';
@@ -29,35 +29,27 @@ export function TubeInspector({ document, tube, readOnly, onEdit }: { document: 
       <fieldset disabled={readOnly} className="space-y-3">
         <InspectorField name="tube-length" label="Length" unit={TUBE_LENGTH_LIMITS.unit.unit} error={form.errorOf('length')}>
           {(control) => (
-            <input
-              {...control}
-              type="text"
-              inputMode="decimal"
-              autoComplete="off"
-              {...form.textField('length', {
+            <DecimalInput
+              control={control}
+              testId="inspector-field-tube-length"
+              field={form.textField('length', {
                 schema: tubeFormSchema.shape.length,
                 current: tube.lengthM,
                 apply: (lengthM) => onEdit('Set tube length', (draft) => setTube(draft, tube.id, { lengthM })),
               })}
-              className={inspectorValueClassName}
-              data-testid="inspector-field-tube-length"
             />
           )}
         </InspectorField>
         <InspectorField name="tube-inner-diameter" label="Inner diameter" unit={TUBE_BORE_LIMITS.unit.unit} error={form.errorOf('innerDiameter')}>
           {(control) => (
-            <input
-              {...control}
-              type="text"
-              inputMode="decimal"
-              autoComplete="off"
-              {...form.textField('innerDiameter', {
+            <DecimalInput
+              control={control}
+              testId="inspector-field-tube-inner-diameter"
+              field={form.textField('innerDiameter', {
                 schema: tubeFormSchema.shape.innerDiameter,
                 current: tube.innerDiameterM,
                 apply: (innerDiameterM) => onEdit('Set tube inner diameter', (draft) => setTube(draft, tube.id, { innerDiameterM })),
               })}
-              className={inspectorValueClassName}
-              data-testid="inspector-field-tube-inner-diameter"
             />
           )}
         </InspectorField>
