@@ -64,3 +64,55 @@ test('a run of the largest demo circuit plays on the drawing; frames per second 
   mkdirSync('test-results', { recursive: true });
   writeFileSync('test-results/editor-fps.txt', `${line}\n`);
 });
+
+test('a new two-hand circuit drawn from the parts list runs: both buttons bring the piston to its end', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.getByTestId('new-circuit').click();
+  const title = `Two-hand from scratch ${Date.now()}`;
+  await page.getByTestId('new-circuit-title').fill(title);
+  await page.getByTestId('new-circuit-submit').click();
+  await page.getByTestId('circuit-link').filter({ hasText: title }).click();
+  const editor = new EditorPage(page);
+  await expect(editor.editor()).toBeVisible();
+
+  // Away from the canvas's edges: a connection dragged near an edge pans the view.
+  await editor.place('cylinder-double-acting', { x: 380, y: 90 });
+  await editor.place('one-way-flow-control', { x: 600, y: 180 });
+  await editor.place('valve-5-2', { x: 380, y: 240 });
+  await editor.place('two-pressure-valve', { x: 380, y: 330 });
+  await editor.place('valve-3-2-nc', { x: 250, y: 420 });
+  await editor.place('valve-3-2-nc', { x: 530, y: 420 });
+  await editor.place('air-supply', { x: 130, y: 430 });
+  await expect(editor.summary()).toHaveText('7 components · 0 tubes · 0 wires');
+
+  // Designations in the order the parts came: 1V1 the flow control, 1V2 the 5/2 valve, 1V3 the two-pressure valve.
+  const joins: Array<[string, string, string, string]> = [
+    ['0Z1', '2', '1S1', '1'],
+    ['0Z1', '2', '1S2', '1'],
+    ['0Z1', '2', '1V2', '1'],
+    ['1S1', '2', '1V3', '1.1'],
+    ['1S2', '2', '1V3', '1.2'],
+    ['1V3', '2', '1V2', '14'],
+    ['1V2', '4', '1A1', 'A'],
+    ['1V2', '2', '1V1', '1'],
+    ['1V1', '2', '1A1', 'B'],
+  ];
+  for (const [a, pa, b, pb] of joins) await editor.join(editor.port(a, pa), editor.port(b, pb));
+  await expect(editor.summary()).toHaveText(`7 components · ${joins.length} tubes · 0 wires`);
+
+  // The main valve is worked by the two-pressure valve's air, not by a button.
+  await editor.component('1V2').click();
+  await page.getByTestId('inspector-field-actuation').selectOption('pilot');
+  await expect(page.getByTestId('checks-summary')).not.toContainText('error');
+  await editor.saveRevision('Two-hand start from scratch');
+
+  await page.getByTestId('run-start').click();
+  await expect.poll(() => editor.runTime()).toBeGreaterThan(0.3);
+  await editor.component('1S1').click({ modifiers: ['Shift'] });
+  const oneHandFrom = await editor.runTime();
+  await expect.poll(() => editor.runTime()).toBeGreaterThan(oneHandFrom + 0.5);
+  expect(await editor.extension('1A1')).toBeLessThan(0.001);
+  await editor.component('1S2').click({ modifiers: ['Shift'] });
+  await expect.poll(() => editor.extension('1A1'), { timeout: 20_000 }).toBeGreaterThan(0.999);
+  await page.screenshot({ path: 'test-results/screens/editor-two-hand-1440.png' });
+});

@@ -417,7 +417,7 @@ function EditorFrame({
           >
             <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} />
             <Controls showInteractive={false} position="bottom-right" />
-            <MiniMap pannable zoomable position="bottom-left" className="!hidden sm:!block" ariaLabel="Overview of the drawing" />
+            <MiniMap pannable zoomable position="top-right" style={{ width: 150, height: 100 }} className="!hidden sm:!block" ariaLabel="Overview of the drawing" />
           </ReactFlow>
           </RunContext.Provider>
           {frame ? <PressureLegend topBar={topBar} /> : null}
