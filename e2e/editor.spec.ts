@@ -51,6 +51,19 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
   await expect(editor.revisionState()).toContainText('unsaved changes');
 
+  // Duplicate and copy-paste make a new part with the next designation; undo takes it away again.
+  await editor.component('1A1').click();
+  await page.getByTestId('duplicate').click();
+  await expect(editor.summary()).toHaveText('4 components · 3 tubes · 0 wires');
+  await expect(editor.component('2A1')).toBeVisible();
+  await page.getByTestId('undo').click();
+  await editor.component('1V1').click();
+  await page.keyboard.press('Control+c');
+  await page.keyboard.press('Control+v');
+  await expect(editor.component('1V2')).toBeVisible();
+  await page.getByTestId('undo').click();
+  await expect(editor.summary()).toHaveText('3 components · 3 tubes · 0 wires');
+
   // The details form: the cylinder's stroke in mm, checked against its range, undone like any edit.
   await editor.component('1A1').click();
   const stroke = page.getByTestId('inspector-field-stroke');

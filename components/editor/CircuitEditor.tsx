@@ -30,7 +30,7 @@ import { frameAt, manualOperation } from './run/run-frame';
 import { useLiveRun } from './run/use-live-run';
 import { ComponentNode } from './ComponentNode';
 import { checksOf, problemsByItem } from './diagnostics';
-import { addComponent, checkConnection, connect, removeItems } from './document-commands';
+import { addComponent, checkConnection, connect, duplicateItems, removeItems } from './document-commands';
 import { createEditorStore, type EditorStore } from './editor-store';
 import { EditorToolbar } from './EditorToolbar';
 import { Inspector } from './Inspector';
@@ -228,6 +228,21 @@ function EditorFrame({
     [store],
   );
 
+  /** Parts copied with Ctrl+C: the document as it was then (immutable), and which of its parts. */
+  const clipboard = useRef<{ source: CircuitDocument; ids: string[] } | null>(null);
+  const pasteFrom = useCallback(
+    (source: CircuitDocument, ids: readonly string[], label: string) => {
+      if (ids.length === 0) return;
+      const copies = store.getState().edit(label, (d) => duplicateItems(d, source, ids, { x: 2 * GRID, y: 2 * GRID }));
+      store.getState().select({ components: copies, tubes: [], wires: [] });
+    },
+    [store],
+  );
+  const duplicateSelected = useCallback(() => {
+    const { document: current, selection: picked } = store.getState();
+    pasteFrom(current, picked.components, 'Duplicate');
+  }, [pasteFrom, store]);
+
   const removeSelected = useCallback(() => {
     const { selection: picked } = store.getState();
     if (picked.components.length + picked.tubes.length + picked.wires.length === 0) return;
@@ -276,12 +291,17 @@ function EditorFrame({
       const key = event.key.toLowerCase();
       if (key === 'z' && !event.shiftKey) store.getState().undo();
       else if ((key === 'z' && event.shiftKey) || key === 'y') store.getState().redo();
+      else if (key === 'd') duplicateSelected();
+      else if (key === 'c') {
+        const { document: current, selection: picked } = store.getState();
+        if (picked.components.length) clipboard.current = { source: current, ids: [...picked.components] };
+      } else if (key === 'v' && clipboard.current) pasteFrom(clipboard.current.source, clipboard.current.ids, 'Paste');
       else return;
       event.preventDefault();
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [editable, store]);
+  }, [duplicateSelected, editable, pasteFrom, store]);
 
   const onSaved = (revision: SavedRevision) => {
     setSaved({ lockVersion: revision.lockVersion, number: revision.number });
@@ -307,6 +327,8 @@ function EditorFrame({
         onUndo={() => store.getState().undo()}
         onRedo={() => store.getState().redo()}
         onDelete={removeSelected}
+        onDuplicate={duplicateSelected}
+        canDuplicate={selection.components.length > 0}
         onFit={() => void flow.fitView({ padding: 0.2, duration: 200 })}
         onSave={() => setSaving(true)}
         onTogglePalette={() => setPaletteOpen((open) => !open)}

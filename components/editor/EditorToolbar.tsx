@@ -6,6 +6,8 @@ const SHORTCUTS: ReadonlyArray<readonly [string, string]> = [
   ['Ctrl+Z', 'Undo'],
   ['Ctrl+Shift+Z, Ctrl+Y', 'Redo'],
   ['Delete, Backspace', 'Remove the selection'],
+  ['Ctrl+D', 'Duplicate the selected parts'],
+  ['Ctrl+C, Ctrl+V', 'Copy the selected parts, paste them'],
   ['Shift+click', 'Add to the selection'],
   ['Drag on empty canvas', 'Select with a frame'],
   ['Right or middle drag, wheel', 'Pan'],
@@ -26,6 +28,8 @@ interface EditorToolbarProps {
   onUndo: () => void;
   onRedo: () => void;
   onDelete: () => void;
+  onDuplicate: () => void;
+  canDuplicate: boolean;
   onFit: () => void;
   onSave: () => void;
   onTogglePalette: () => void;
@@ -56,6 +60,9 @@ export function EditorToolbar(props: EditorToolbarProps) {
           </Button>
           <Button size="sm" variant="quiet" onClick={props.onRedo} disabled={!props.canRedo} title="Redo (Ctrl+Shift+Z)" data-testid="redo">
             Redo
+          </Button>
+          <Button size="sm" variant="quiet" onClick={props.onDuplicate} disabled={!props.canDuplicate} title="Duplicate the selected parts (Ctrl+D)" data-testid="duplicate">
+            Duplicate
           </Button>
           <Button size="sm" variant="quiet" onClick={props.onDelete} disabled={!props.hasSelection} title="Remove the selection (Delete)" data-testid="delete">
             Remove

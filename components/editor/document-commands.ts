@@ -63,6 +63,53 @@ export function removeItems(draft: CircuitDocument, items: ItemSelection): void 
   draft.links = keep(draft.links, (l) => !gone.has(l.from) && !gone.has(l.to));
 }
 
+/**
+ * Copies components of `source` into the document, with the tubes, wires and links that run
+ * between them, shifted by an offset. `source` is the document itself for Duplicate, or the
+ * document as it was when the parts were copied, for Paste. Each copy gets a new id and the next
+ * free designation of its kind, and keeps its parameters and label. Returns the copies' ids, in
+ * the order given; ids not in `source` are skipped.
+ */
+export function duplicateItems(
+  draft: CircuitDocument,
+  source: CircuitDocument,
+  componentIds: readonly string[],
+  offset: { x: number; y: number },
+): string[] {
+  const newIdOf = new Map<string, string>();
+  for (const id of componentIds) {
+    const original = source.components.find((c) => c.id === id);
+    const type = original ? componentTypeById(original.type) : undefined;
+    if (!original || !type || newIdOf.has(id)) continue;
+    const copyId = freeId(draft, original.type);
+    newIdOf.set(id, copyId);
+    draft.components.push({
+      ...original,
+      id: copyId,
+      tag: nextTag(type, draft.components.map((c) => c.tag)),
+      parameters: { ...original.parameters },
+      position: { x: original.position.x + offset.x, y: original.position.y + offset.y },
+    });
+  }
+  const inside = (end: PortRef) => newIdOf.has(end.component);
+  const moved = (end: PortRef) => ({ component: newIdOf.get(end.component)!, port: end.port });
+  const shift = (p: { x: number; y: number }) => ({ x: p.x + offset.x, y: p.y + offset.y });
+  for (const tube of source.tubes.filter((t) => inside(t.from) && inside(t.to))) {
+    draft.tubes.push({ ...tube, id: freeConnectionId(draft, 't'), from: moved(tube.from), to: moved(tube.to), bends: tube.bends.map(shift) });
+  }
+  for (const wire of source.wires.filter((w) => inside(w.from) && inside(w.to))) {
+    draft.wires.push({ ...wire, id: freeConnectionId(draft, 'w'), from: moved(wire.from), to: moved(wire.to), bends: wire.bends.map(shift) });
+  }
+  const takenLinks = new Set(draft.links.map((l) => l.id));
+  for (const link of source.links.filter((l) => newIdOf.has(l.from) && newIdOf.has(l.to))) {
+    let n = 1;
+    while (takenLinks.has(`l${n}`)) n += 1;
+    takenLinks.add(`l${n}`);
+    draft.links.push({ ...link, id: `l${n}`, from: newIdOf.get(link.from)!, to: newIdOf.get(link.to)! });
+  }
+  return [...newIdOf.values()];
+}
+
 export type ConnectionCheck = { ok: true; kind: 'tube' | 'wire' } | { ok: false; reason: string };
 
 /**

@@ -1,6 +1,6 @@
 import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
-import { addComponent, checkConnection, connect, NEW_TUBE, removeItems } from '@/components/editor/document-commands';
+import { addComponent, checkConnection, connect, duplicateItems, NEW_TUBE, removeItems } from '@/components/editor/document-commands';
 import { nextTag } from '@/components/editor/tags';
 import { circuitDocumentSchema, emptyDocument, type CircuitDocument } from '@/engine/document/schema';
 
@@ -66,5 +66,40 @@ describe('connections', () => {
     expect(after.tubes).toEqual([]);
     expect(after.wires).toEqual([]);
     expect(after.links).toEqual([]);
+  });
+});
+
+describe('duplicating', () => {
+  it('copies parts with new ids and designations, and only the tubes and wires between copied parts', () => {
+    const { doc, ids } = withParts('valve-5-2', 'cylinder-double-acting', 'air-supply');
+    const [valve, cylinder, supply] = ids as [string, string, string];
+    const joined = produce(doc, (d) => {
+      connect(d, { component: valve, port: '4' }, { component: cylinder, port: 'A' });
+      connect(d, { component: supply, port: '2' }, { component: valve, port: '1' });
+      d.components[0]!.parameters = { actuation: 'pilot' };
+    });
+    let copies: string[] = [];
+    const after = produce(joined, (d) => {
+      copies = duplicateItems(d, joined, [valve, cylinder, 'no-such-part'], { x: 20, y: 40 });
+    });
+    expect(copies).toHaveLength(2);
+    const [valveCopy, cylinderCopy] = copies.map((id) => after.components.find((c) => c.id === id)!);
+    expect(valveCopy).toMatchObject({ type: 'valve-5-2', tag: '1V2', parameters: { actuation: 'pilot' }, position: { x: 20, y: 40 } });
+    expect(cylinderCopy).toMatchObject({ type: 'cylinder-double-acting', tag: '2A1', position: { x: 120, y: 40 } });
+    // The tube between valve and cylinder is copied; the one from the supply (not copied) is not.
+    expect(after.tubes).toHaveLength(3);
+    expect(after.tubes[2]).toMatchObject({ from: { component: valveCopy!.id, port: '4' }, to: { component: cylinderCopy!.id, port: 'A' } });
+    expect(new Set(after.tubes.map((t) => t.id)).size).toBe(3);
+    expect(circuitDocumentSchema.safeParse(after).success).toBe(true);
+    // The originals are untouched.
+    expect(after.components.slice(0, 3)).toEqual(joined.components);
+  });
+
+  it('pastes what was copied from an earlier state of the document, even after the originals went', () => {
+    const { doc, ids } = withParts('throttle');
+    const copiedFrom = doc;
+    const emptied = produce(doc, (d) => removeItems(d, { components: ids, tubes: [], wires: [] }));
+    const pasted = produce(emptied, (d) => void duplicateItems(d, copiedFrom, ids, { x: 10, y: 10 }));
+    expect(pasted.components).toEqual([expect.objectContaining({ type: 'throttle', tag: '1V1', position: { x: 10, y: 10 } })]);
   });
 });
