@@ -26,7 +26,8 @@ import { rampColour, rampTopBar } from './run/pressure-ramp';
 import { RunBar } from './run/RunBar';
 import { RunContext, type RunView } from './run/run-context';
 import { TracePlot } from './run/TracePlot';
-import { frameAt, manualOperation } from './run/run-frame';
+import { Hands, handOperationOf } from './run/hands';
+import { frameAt, prepareRun } from './run/run-frame';
 import { useLiveRun } from './run/use-live-run';
 import { ComponentNode } from './ComponentNode';
 import { checksOf, problemsByItem } from './diagnostics';
@@ -112,7 +113,8 @@ function EditorFrame({
   const run = useLiveRun();
   const running = run.status !== 'stopped';
   const editable = canEdit && !running;
-  const frame = useMemo(() => (running && run.trace ? frameAt(run.trace, document, run.t) : null), [document, run.t, run.trace, running]);
+  const prepared = useMemo(() => (run.trace ? prepareRun(run.trace, document) : null), [document, run.trace]);
+  const frame = useMemo(() => (running && prepared ? frameAt(prepared, run.t) : null), [prepared, run.t, running]);
   const topBar = rampTopBar(frame?.highestBar ?? 0);
   const nodes = useMemo(() => nodesOf(document, selection, problems), [document, selection, problems]);
   const edges = useMemo(() => {
@@ -128,38 +130,22 @@ function EditorFrame({
     });
   }, [document, frame, hoveredTube, problems, running, selection, topBar]);
 
-  const pressed = useRef(new Set<string>());
-  const kept = useRef(new Set<string>());
+  const [hands] = useState(() => new Hands());
+  const { act, status: runStatus } = run;
   const runView = useMemo<RunView>(
     () => ({
       running,
       states: frame?.components ?? new Map(),
       actuate: (componentId, phase, keep = false) => {
         const component = document.components.find((c) => c.id === componentId);
-        const operation = component ? manualOperation(component) : null;
-        if (!operation || run.status === 'ended' || run.status === 'failed') return;
-        if (operation === 'hold') {
-          // Shift+click keeps a button pressed until the next Shift+click, so two hands' worth can be held at once.
-          if (phase === 'down' && keep) {
-            if (kept.current.delete(componentId)) {
-              pressed.current.delete(componentId);
-              run.act(componentId, 'release');
-            } else if (!pressed.current.has(componentId)) {
-              kept.current.add(componentId);
-              pressed.current.add(componentId);
-              run.act(componentId, 'press');
-            }
-          } else if (phase === 'down' && !pressed.current.has(componentId)) {
-            pressed.current.add(componentId);
-            run.act(componentId, 'press');
-          } else if (phase === 'up' && !kept.current.has(componentId) && pressed.current.delete(componentId)) run.act(componentId, 'release');
-        } else if (phase === 'down') {
-          const struck = frame?.components.get(componentId)?.state !== undefined;
-          run.act(componentId, operation === 'emergency-stop' && !struck ? 'press' : 'toggle');
-        }
+        const operation = component ? handOperationOf(component) : null;
+        if (!operation || runStatus === 'ended' || runStatus === 'failed') return;
+        const struck = frame?.components.get(componentId)?.state !== undefined;
+        const input = hands.input(componentId, operation, phase, keep, struck);
+        if (input) act(componentId, input);
       },
     }),
-    [document.components, frame, run, running],
+    [act, document.components, frame, hands, runStatus, running],
   );
 
   const pickCheck = useCallback(
@@ -350,8 +336,7 @@ function EditorFrame({
         onPause={run.pause}
         onResume={run.resume}
         onStop={() => {
-          pressed.current.clear();
-          kept.current.clear();
+          hands.clear();
           run.reset();
         }}
         onSpeed={run.changeSpeed}

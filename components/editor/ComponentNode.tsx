@@ -7,7 +7,7 @@ import { SymbolFor } from '@/components/symbols/SymbolFor';
 import { componentTypeById } from '@/engine/components/registry';
 import type { ComponentFlowNode } from './flow-mapping';
 import { RunContext } from './run/run-context';
-import { manualOperation } from './run/run-frame';
+import { handOperationOf } from './run/hands';
 
 const SIDE_TO_POSITION = { top: Position.Top, right: Position.Right, bottom: Position.Bottom, left: Position.Left } as const;
 
@@ -18,7 +18,7 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
   const geometry = symbolGeometry(component.type);
   const run = useContext(RunContext);
   const shown = run.running ? run.states.get(component.id) : undefined;
-  const workable = run.running && manualOperation(component) !== null;
+  const workable = run.running && handOperationOf(component) !== null;
   return (
     <div
       onPointerDown={workable ? (event) => run.actuate(component.id, 'down', event.shiftKey) : undefined}

@@ -1,5 +1,5 @@
 import { conductanceParam, criticalRatioParam, pilotHysteresisParam, pilotThresholdParam, switchTimeParam, withDefault } from './parameters';
-import type { Behaviour, BuildContext, ComponentType, InputCommand, NodeRef, ParameterSpec, PortSpec, RestrictionRef, RuntimeApi } from './types';
+import type { Behaviour, BuildContext, ComponentType, HandOperation, InputCommand, NodeRef, ParameterSpec, ParameterValues, PortSpec, RestrictionRef, RuntimeApi } from './types';
 
 /**
  * Shared model of a directional control valve: a spool with two or three
@@ -61,6 +61,16 @@ export const ACTUATIONS = ['pushbutton', 'mushroom', 'lever-detent', 'selector-d
 export const RETURNS = ['spring', 'pilot', 'solenoid', 'detent'] as const;
 type Actuation = (typeof ACTUATIONS)[number];
 
+/** A lever or selector with a detent stays where it is put, and moves back only when worked again. */
+const isDetent = (kind: string | null) => kind === 'lever-detent' || kind === 'selector-detent';
+
+/** Worked by hand on side a: a button is held, a detented lever or selector switched; other actuations are not a hand's. */
+function valveHandOperation(parameters: ParameterValues): HandOperation | null {
+  const actuation = String(parameters.actuation);
+  if (actuation === 'pushbutton' || actuation === 'mushroom') return 'hold';
+  return isDetent(actuation) ? 'switch' : null;
+}
+
 /** Window around a linked stroke position within which a roller is held down, m (common practice: a few mm of cam travel). */
 export const ROLLER_WINDOW_M = 0.002;
 
@@ -92,6 +102,7 @@ export function defineDirectionalValve(def: ValveDefinition): ComponentType {
     positions: def.positions,
     pilotPorts: def.pilotPorts,
     inputs: ['press', 'release', 'toggle', 'set'],
+    handOperation: valveHandOperation,
     build: (ctx) => buildValveBehaviour(ctx, def),
   };
 }
@@ -193,7 +204,6 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
     api.schedule(switchTime, 'switch');
   };
 
-  const isLatching = (kind: Actuation | null) => kind === 'lever-detent' || kind === 'selector-detent';
   const guardValues = new Array<number>(2 + 2 * links.length).fill(0);
 
   return {
@@ -245,11 +255,11 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
         return;
       }
       if (command.action === 'set') side.commanded = (command.value ?? 0) > 0;
-      else if (command.action === 'toggle' || isLatching(kind)) {
+      else if (command.action === 'toggle' || isDetent(kind)) {
         if (command.action !== 'release') side.commanded = !side.commanded;
       } else side.commanded = command.action === 'press';
       // A detented lever moved to one side leaves the other.
-      if (isLatching(kind) && side.commanded) sides[1 - s]!.commanded = false;
+      if (isDetent(kind) && side.commanded) sides[1 - s]!.commanded = false;
       reconsider(api);
     },
     signals() {

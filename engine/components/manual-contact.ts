@@ -1,7 +1,9 @@
 import { terminals } from './electrical-parameters';
-import type { ComponentType, InputCommand } from './types';
+import type { ComponentType, HandOperation, InputCommand } from './types';
 
 type Operation = 'momentary' | 'latching' | 'emergency-stop';
+
+const BY_HAND: Readonly<Record<Operation, HandOperation>> = { momentary: 'hold', latching: 'switch', 'emergency-stop': 'strike' };
 
 /**
  * Hand-operated contacts: a momentary push-button (NO or NC), a latching selector switch,
@@ -19,6 +21,7 @@ export function manualContact(def: { id: string; label: string; description: str
     parameters: {},
     states: def.operation === 'emergency-stop' ? ['ready', 'struck'] : ['released', 'operated'],
     inputs: def.operation === 'emergency-stop' ? ['press', 'toggle', 'set'] : ['press', 'release', 'toggle', 'set'],
+    handOperation: () => BY_HAND[def.operation],
     build(ctx) {
       const control = ctx.control();
       const contact = control.addContact(ctx.terminal(a!), ctx.terminal(b!), def.normallyClosed, ctx.componentId);

@@ -128,6 +128,12 @@ export interface InputCommand {
   value?: number;
 }
 
+/**
+ * How a person works a part by hand on a running drawing: held while pressed, switched over at
+ * each push (detent, latching selector), or struck and later reset (an emergency stop).
+ */
+export type HandOperation = 'hold' | 'switch' | 'strike';
+
 /** The running behaviour of one placed component. All methods are optional. */
 export interface Behaviour {
   /**
@@ -201,6 +207,8 @@ export interface ComponentType {
   readonly pilotPorts?: readonly [string, string];
   /** Manual inputs a user can give on the drawing. */
   readonly inputs?: readonly InputAction[];
+  /** How a person works it by hand, given its parameters with the defaults filled in; absent or null: not by hand. */
+  handOperation?(parameters: ParameterValues): HandOperation | null;
   build(ctx: BuildContext): Behaviour;
 }
 

@@ -35,24 +35,26 @@ export function useLiveRun() {
   const runDocument = useRef<CircuitDocument | null>(null);
 
   const request = useCallback(() => {
-    worker.current ??= new Worker(new URL('./simulation.worker.ts', import.meta.url), { type: 'module' });
-    worker.current.onmessage = (event: MessageEvent<SimulateReply>) => {
-      const reply = event.data;
-      if (reply.requestId !== requestId.current) return;
-      if (reply.kind === 'failed') {
-        clock.current.playing = false;
-        setStatus('failed');
-        setMessage(reply.message);
-        return;
-      }
-      setTrace({ intervalS: reply.intervalS, time: reply.time, names: reply.names, columns: reply.columns });
-      setComputeMs(reply.computeMs);
-      setStatus((s) => (s === 'starting' ? 'playing' : s));
-      if (!clock.current.playing && clock.current.t === 0) {
-        clock.current.playing = true;
-        clock.current.last = performance.now();
-      }
-    };
+    if (!worker.current) {
+      worker.current = new Worker(new URL('./simulation.worker.ts', import.meta.url), { type: 'module' });
+      worker.current.onmessage = (event: MessageEvent<SimulateReply>) => {
+        const reply = event.data;
+        if (reply.requestId !== requestId.current) return;
+        if (reply.kind === 'failed') {
+          clock.current.playing = false;
+          setStatus('failed');
+          setMessage(reply.message);
+          return;
+        }
+        setTrace({ intervalS: reply.intervalS, time: reply.time, names: reply.names, columns: reply.columns });
+        setComputeMs(reply.computeMs);
+        setStatus((s) => (s === 'starting' ? 'playing' : s));
+        if (!clock.current.playing && clock.current.t === 0) {
+          clock.current.playing = true;
+          clock.current.last = performance.now();
+        }
+      };
+    }
     requestId.current += 1;
     const message: SimulateRequest = {
       kind: 'simulate',

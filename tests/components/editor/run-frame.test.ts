@@ -1,7 +1,7 @@
 import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
 import { addComponent, connect } from '@/components/editor/document-commands';
-import { frameAt, manualOperation, type RunTrace } from '@/components/editor/run/run-frame';
+import { frameAt, prepareRun, type RunTrace } from '@/components/editor/run/run-frame';
 import { emptyDocument } from '@/engine/document/schema';
 
 const ids: string[] = [];
@@ -26,36 +26,26 @@ const trace: RunTrace = {
   ],
 };
 
+const prepared = prepareRun(trace, document);
+
 describe('a run on the drawing', () => {
   it('reads the row at or before the playback time, and clamps to the ends of the run', () => {
-    expect(frameAt(trace, document, 0.015).t).toBe(0.01);
-    expect(frameAt(trace, document, 0.02).t).toBe(0.02);
-    expect(frameAt(trace, document, 5).t).toBe(0.02);
-    expect(frameAt(trace, document, -1).t).toBe(0);
+    expect(frameAt(prepared, 0.015).t).toBe(0.01);
+    expect(frameAt(prepared, 0.02).t).toBe(0.02);
+    expect(frameAt(prepared, 5).t).toBe(0.02);
+    expect(frameAt(prepared, -1).t).toBe(0);
   });
 
   it('gives each tube its gauge pressure in bar, the valve its position, the piston its share of the stroke and the coil its current', () => {
-    const frame = frameAt(trace, document, 0.01);
+    const frame = frameAt(prepared, 0.01);
     expect(frame.tubeBar.get('t1')).toBeCloseTo(3, 12);
     expect(frame.components.get(valve)).toEqual({ activePosition: 0 });
     expect(frame.components.get(cylinder)?.extension).toBeCloseTo(0.5, 12); // default stroke 100 mm
     expect(frame.components.get(coil)).toEqual({ energised: false });
-    expect(frameAt(trace, document, 0.02).components.get(coil)).toEqual({ energised: true });
+    expect(frameAt(prepared, 0.02).components.get(coil)).toEqual({ energised: true });
   });
 
   it('scales the colours by the highest pressure anywhere in the whole run', () => {
-    expect(frameAt(trace, document, 0).highestBar).toBeCloseTo(6.5, 12);
-  });
-
-  it('works push-buttons by holding, detented levers by switching, and nothing else by hand', () => {
-    const part = (type: string, parameters = {}) => ({ id: 'x', type, tag: 'X', parameters, position: { x: 0, y: 0 }, rotation: 0 as const, mirrored: false });
-    expect(manualOperation(part('valve-3-2-nc'))).toBe('hold');
-    expect(manualOperation(part('valve-5-2', { actuation: 'lever-detent' }))).toBe('switch');
-    expect(manualOperation(part('valve-5-2', { actuation: 'pilot' }))).toBeNull();
-    expect(manualOperation(part('pushbutton-nc'))).toBe('hold');
-    expect(manualOperation(part('selector-switch'))).toBe('switch');
-    expect(manualOperation(part('emergency-stop'))).toBe('emergency-stop');
-    expect(manualOperation(part('cylinder-double-acting'))).toBeNull();
-    expect(manualOperation(part('no-such-type'))).toBeNull();
+    expect(frameAt(prepared, 0).highestBar).toBeCloseTo(6.5, 12);
   });
 });
