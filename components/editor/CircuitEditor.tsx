@@ -30,7 +30,7 @@ import { Hands, handOperationOf } from './run/hands';
 import { frameAt, prepareRun } from './run/run-frame';
 import { useLiveRun } from './run/use-live-run';
 import { ComponentNode } from './ComponentNode';
-import { checksOf, problemsByItem } from './diagnostics';
+import { memoizedChecks, problemsByItem } from './diagnostics';
 import { addComponent, checkConnection, connect, duplicateItems, removeItems } from './document-commands';
 import { createEditorStore, type EditorStore } from './editor-store';
 import { EditorToolbar } from './EditorToolbar';
@@ -108,7 +108,8 @@ function EditorFrame({
     writeDraft(window.localStorage, circuit.id, { baseLockVersion: saved.lockVersion, savedAt: new Date().toISOString(), document });
   }, [canEdit, changes, circuit.id, document, saved.lockVersion]);
 
-  const checks = useMemo(() => checksOf(document), [document]);
+  const [checksFor] = useState(memoizedChecks);
+  const checks = checksFor(document);
   const problems = useMemo(() => problemsByItem(checks), [checks]);
   const run = useLiveRun();
   const running = run.status !== 'stopped';

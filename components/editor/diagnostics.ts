@@ -20,3 +20,17 @@ export function problemsByItem(diagnostics: readonly Diagnostic[]): Map<string, 
   }
   return worst;
 }
+
+/**
+ * The checks of the latest drawing, worked out again only when something they read changed:
+ * everything but where the parts are drawn. Moving a part (a drag changes the document at every
+ * pointer move) leaves those the same objects, so a drag compiles nothing.
+ */
+export function memoizedChecks(): (document: CircuitDocument) => Diagnostic[] {
+  let last: { content: readonly unknown[]; checks: Diagnostic[] } | null = null;
+  return (document) => {
+    const content = [document.settings, document.tubes, document.wires, document.links, ...document.components.flatMap((c) => [c.id, c.type, c.tag, c.label, c.parameters])];
+    if (!last || last.content.length !== content.length || last.content.some((x, i) => x !== content[i])) last = { content, checks: checksOf(document) };
+    return last.checks;
+  };
+}

@@ -1,7 +1,7 @@
 import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
-import { checksOf, problemsByItem } from '@/components/editor/diagnostics';
-import { addComponent, connect } from '@/components/editor/document-commands';
+import { checksOf, memoizedChecks, problemsByItem } from '@/components/editor/diagnostics';
+import { addComponent, connect, moveComponents } from '@/components/editor/document-commands';
 import { emptyDocument } from '@/engine/document/schema';
 
 describe('checks on the drawing', () => {
@@ -35,5 +35,19 @@ describe('checks on the drawing', () => {
 
   it('finds nothing to report on an empty drawing', () => {
     expect(checksOf(emptyDocument())).toEqual([]);
+  });
+});
+
+describe('checks while drawing', () => {
+  it('are worked out again when the drawing changes, but not when a part only moves', () => {
+    const checksFor = memoizedChecks();
+    const start = produce(emptyDocument(), (d) => void addComponent(d, 'valve-5-2', { x: 0, y: 0 }));
+    const first = checksFor(start);
+    const moved = produce(start, (d) => moveComponents(d, [{ id: start.components[0]!.id, x: 40, y: 80 }]));
+    expect(checksFor(moved)).toBe(first);
+    const renamed = produce(moved, (d) => void (d.components[0]!.tag = '2V1'));
+    const again = checksFor(renamed);
+    expect(again).not.toBe(first);
+    expect(again.map((c) => c.message).join()).toContain('2V1');
   });
 });
