@@ -3,21 +3,12 @@ import { parameterDefaults, type ParameterValues } from '@/engine/components/typ
 import { FallbackSymbol } from './FallbackSymbol';
 import { symbolGeometry } from './geometry';
 import { DRAWINGS } from './symbol-drawings';
+import type { ShownState } from './symbol-props';
 
-export interface SymbolForProps {
+export interface SymbolForProps extends ShownState {
   typeId: string;
   /** The placed component's parameters; the type's defaults fill the rest. */
   parameters?: ParameterValues;
-  tag?: string;
-  showPortNumbers?: boolean;
-  /** A state name of the type: a valve's position, a switch worked or not, a logic valve's joined input. */
-  state?: string;
-  /** A coil or lamp carrying current. */
-  energised?: boolean;
-  /** A valve's position by index; wins over `state`. */
-  activePosition?: number;
-  /** A cylinder's piston travel as a share of its stroke, 0 (retracted) to 1, for drawing a run. */
-  extension?: number;
   className?: string;
 }
 

@@ -28,18 +28,13 @@ import { SilencerSymbol } from './SilencerSymbol';
 import { ThrottleSymbol } from './ThrottleSymbol';
 import { TimeDelayValveSymbol } from './TimeDelayValveSymbol';
 import { TwoPressureValveSymbol } from './TwoPressureValveSymbol';
+import type { ShownState } from './symbol-props';
 
 /** What the canvas knows about one placed component, handed to its drawing. */
-export interface DrawingRequest {
+export interface DrawingRequest extends ShownState {
   type: ComponentType;
   /** The component's parameters over the type's defaults. */
   parameters: ParameterValues;
-  tag?: string;
-  showPortNumbers?: boolean;
-  state?: string;
-  energised?: boolean;
-  activePosition?: number;
-  extension?: number;
 }
 
 /** Draws one type; null when the type lacks what its drawing needs, so the caller falls back. */

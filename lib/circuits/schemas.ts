@@ -31,4 +31,3 @@ export const appendRevisionBodySchema = z
     expectedLockVersion: z.number().int().min(0),
   })
   .strict();
-export type AppendRevisionBody = z.infer<typeof appendRevisionBodySchema>;
