@@ -11,23 +11,27 @@ test.beforeEach(async ({ page }) => {
   await expect(page.getByTestId('circuit-table')).toBeVisible();
 });
 
+/**
+ * A running two-hand start (buttons 1S1 and 1S2, cylinder 1A1): one button kept pressed leaves
+ * the piston in for half a second of machine time; the second brings it to its end.
+ */
+async function bothHandsNeeded(editor: EditorPage): Promise<void> {
+  await expect.poll(() => editor.runTime()).toBeGreaterThan(0.3);
+  await editor.component('1S1').click({ modifiers: ['Shift'] });
+  const oneHandFrom = await editor.runTime();
+  await expect.poll(() => editor.runTime()).toBeGreaterThan(oneHandFrom + 0.5);
+  expect(await editor.extension('1A1')).toBeLessThan(0.001);
+  await editor.component('1S2').click({ modifiers: ['Shift'] });
+  await expect.poll(() => editor.extension('1A1'), { timeout: 20_000 }).toBeGreaterThan(0.999);
+}
+
 test('the two-hand demo extends only once both buttons are pressed on the drawing', async ({ page }) => {
   const editor = new EditorPage(page);
   await editor.openByTitle(DEMO_CIRCUITS[0]!.title);
   await page.getByTestId('run-start').click();
   // The plot under the drawing takes room: bring every part into view.
   await page.getByTestId('fit').click();
-  await expect.poll(() => editor.runTime()).toBeGreaterThan(0.3);
-
-  // One hand: the two-pressure valve passes nothing, the press stays up.
-  await editor.component('1S1').click({ modifiers: ['Shift'] });
-  const oneHandFrom = await editor.runTime();
-  await expect.poll(() => editor.runTime()).toBeGreaterThan(oneHandFrom + 0.5);
-  expect(await editor.extension('1A1')).toBeLessThan(0.001);
-
-  // Both hands: the press comes down to its end.
-  await editor.component('1S2').click({ modifiers: ['Shift'] });
-  await expect.poll(() => editor.extension('1A1'), { timeout: 20_000 }).toBeGreaterThan(0.999);
+  await bothHandsNeeded(editor);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.getByTestId('fit').click();
@@ -107,12 +111,6 @@ test('a new two-hand circuit drawn from the parts list runs: both buttons bring 
   await editor.saveRevision('Two-hand start from scratch');
 
   await page.getByTestId('run-start').click();
-  await expect.poll(() => editor.runTime()).toBeGreaterThan(0.3);
-  await editor.component('1S1').click({ modifiers: ['Shift'] });
-  const oneHandFrom = await editor.runTime();
-  await expect.poll(() => editor.runTime()).toBeGreaterThan(oneHandFrom + 0.5);
-  expect(await editor.extension('1A1')).toBeLessThan(0.001);
-  await editor.component('1S2').click({ modifiers: ['Shift'] });
-  await expect.poll(() => editor.extension('1A1'), { timeout: 20_000 }).toBeGreaterThan(0.999);
+  await bothHandsNeeded(editor);
   await page.screenshot({ path: 'test-results/screens/editor-two-hand-1440.png' });
 });

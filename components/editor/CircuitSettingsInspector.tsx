@@ -3,7 +3,7 @@
 import { useMemo } from 'react';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { AMBIENT_PRESSURE_LIMITS, AMBIENT_TEMPERATURE_LIMITS, setSettings, type DocumentEdit } from './inspector-commands';
-import { DecimalInput, InspectorField } from './InspectorField';
+import { DecimalField } from './DecimalField';
 import { settingsFormSchema, settingsFormValues } from './parameter-form-schema';
 import { useCommittingForm } from './use-committing-form';
 
@@ -19,38 +19,31 @@ export function CircuitSettingsInspector({ settings, readOnly, onEdit }: { setti
         <p className="mt-0.5 text-xs text-ink-soft">Select a part or a tube on the drawing to edit it. These settings apply to the whole circuit.</p>
       </header>
       <fieldset disabled={readOnly} className="space-y-3">
-        <InspectorField
+        <DecimalField
+          form={form}
+          path="ambientPressure"
           name="ambient-pressure"
           label="Ambient pressure"
           unit={AMBIENT_PRESSURE_LIMITS.unit.unit}
           hint="Gauge pressures in the circuit are measured from this."
-          error={form.errorOf('ambientPressure')}
-        >
-          {(control) => (
-            <DecimalInput
-              control={control}
-              testId="inspector-field-ambient-pressure"
-              field={form.textField('ambientPressure', {
-                schema: settingsFormSchema.shape.ambientPressure,
-                current: settings.ambientPressurePa,
-                apply: (ambientPressurePa) => onEdit('Set ambient pressure', (draft) => setSettings(draft, { ambientPressurePa })),
-              })}
-            />
-          )}
-        </InspectorField>
-        <InspectorField name="ambient-temperature" label="Ambient temperature" unit={AMBIENT_TEMPERATURE_LIMITS.unit.unit} error={form.errorOf('ambientTemperature')}>
-          {(control) => (
-            <DecimalInput
-              control={control}
-              testId="inspector-field-ambient-temperature"
-              field={form.textField('ambientTemperature', {
-                schema: settingsFormSchema.shape.ambientTemperature,
-                current: settings.ambientTemperatureK,
-                apply: (ambientTemperatureK) => onEdit('Set ambient temperature', (draft) => setSettings(draft, { ambientTemperatureK })),
-              })}
-            />
-          )}
-        </InspectorField>
+          target={{
+            schema: settingsFormSchema.shape.ambientPressure,
+            current: settings.ambientPressurePa,
+            apply: (ambientPressurePa) => onEdit('Set ambient pressure', (draft) => setSettings(draft, { ambientPressurePa })),
+          }}
+        />
+        <DecimalField
+          form={form}
+          path="ambientTemperature"
+          name="ambient-temperature"
+          label="Ambient temperature"
+          unit={AMBIENT_TEMPERATURE_LIMITS.unit.unit}
+          target={{
+            schema: settingsFormSchema.shape.ambientTemperature,
+            current: settings.ambientTemperatureK,
+            apply: (ambientTemperatureK) => onEdit('Set ambient temperature', (draft) => setSettings(draft, { ambientTemperatureK })),
+          }}
+        />
       </fieldset>
     </form>
   );

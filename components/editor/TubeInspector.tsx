@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import { tubeVolume } from '@/engine/calc/tube';
 import type { CircuitDocument, Tube } from '@/engine/document/schema';
 import { setTube, TUBE_BORE_LIMITS, TUBE_LENGTH_LIMITS, type DocumentEdit } from './inspector-commands';
-import { DecimalInput, InspectorField } from './InspectorField';
+import { DecimalField } from './DecimalField';
 import { tubeFormSchema, tubeFormValues } from './parameter-form-schema';
 import { formatWithUnit, QUANTITY_UNITS } from './quantity-units';
 import { useCommittingForm } from './use-committing-form';
@@ -27,32 +27,30 @@ export function TubeInspector({ document, tube, readOnly, onEdit }: { document: 
         </p>
       </header>
       <fieldset disabled={readOnly} className="space-y-3">
-        <InspectorField name="tube-length" label="Length" unit={TUBE_LENGTH_LIMITS.unit.unit} error={form.errorOf('length')}>
-          {(control) => (
-            <DecimalInput
-              control={control}
-              testId="inspector-field-tube-length"
-              field={form.textField('length', {
-                schema: tubeFormSchema.shape.length,
-                current: tube.lengthM,
-                apply: (lengthM) => onEdit('Set tube length', (draft) => setTube(draft, tube.id, { lengthM })),
-              })}
-            />
-          )}
-        </InspectorField>
-        <InspectorField name="tube-inner-diameter" label="Inner diameter" unit={TUBE_BORE_LIMITS.unit.unit} error={form.errorOf('innerDiameter')}>
-          {(control) => (
-            <DecimalInput
-              control={control}
-              testId="inspector-field-tube-inner-diameter"
-              field={form.textField('innerDiameter', {
-                schema: tubeFormSchema.shape.innerDiameter,
-                current: tube.innerDiameterM,
-                apply: (innerDiameterM) => onEdit('Set tube inner diameter', (draft) => setTube(draft, tube.id, { innerDiameterM })),
-              })}
-            />
-          )}
-        </InspectorField>
+        <DecimalField
+          form={form}
+          path="length"
+          name="tube-length"
+          label="Length"
+          unit={TUBE_LENGTH_LIMITS.unit.unit}
+          target={{
+            schema: tubeFormSchema.shape.length,
+            current: tube.lengthM,
+            apply: (lengthM) => onEdit('Set tube length', (draft) => setTube(draft, tube.id, { lengthM })),
+          }}
+        />
+        <DecimalField
+          form={form}
+          path="innerDiameter"
+          name="tube-inner-diameter"
+          label="Inner diameter"
+          unit={TUBE_BORE_LIMITS.unit.unit}
+          target={{
+            schema: tubeFormSchema.shape.innerDiameter,
+            current: tube.innerDiameterM,
+            apply: (innerDiameterM) => onEdit('Set tube inner diameter', (draft) => setTube(draft, tube.id, { innerDiameterM })),
+          }}
+        />
       </fieldset>
       <p className="mt-3 text-sm text-ink-soft">
         Volume <output className="value" data-testid="inspector-tube-volume">{formatWithUnit(tubeVolume(tube.lengthM, tube.innerDiameterM), QUANTITY_UNITS.volume, VOLUME_DIGITS)}</output>
