@@ -247,6 +247,7 @@ export function compile(document: CircuitDocument): CompileResult {
     behaviours.push({ componentId: component.id, tag: component.tag, behaviour: type.build(ctx) });
   }
 
+  const wireNets = document.wires.map((w) => ({ wireId: w.id, net: netOf(w.from.component, w.from.port) }));
   control.useNets(netOfRoot.size);
   for (const node of nodes) {
     if (!node.fixed && node.volumeM3 <= 0 && node.chambers.length === 0) node.volumeM3 = PORT_VOLUME_M3;
@@ -256,7 +257,7 @@ export function compile(document: CircuitDocument): CompileResult {
     componentIds.set(b.componentId, i);
     componentIds.set(b.tag, i);
   });
-  return { model: { ambientPa, temperatureK, nodes, restrictions, pistons, behaviours, portNodes, componentIds, control }, diagnostics };
+  return { model: { ambientPa, temperatureK, nodes, restrictions, pistons, behaviours, portNodes, componentIds, control, wireNets }, diagnostics };
 }
 
 function addNode(nodes: NodeModel[], node: NodeModel): number {

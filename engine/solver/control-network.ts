@@ -53,6 +53,8 @@ export class ControlCircuit implements ControlNetwork {
   private settlesAtInstant = 0;
   private raceReportedAt = Number.NaN;
   private shorted = false;
+  /** Nets at + potential after the last settle (none while shorted: the supply has tripped). */
+  private live: Uint8Array = new Uint8Array(0);
   /** Owners of contacts that changed since the last drain, so whoever shows contact states reads just those. */
   private changed: string[] = [];
   /** Elements at each net, built at the first settle (the wiring does not change while running). */
@@ -65,6 +67,11 @@ export class ControlCircuit implements ControlNetwork {
   /** Tells the network how many nets the wiring made. */
   useNets(count: number): void {
     this.netCount = count;
+  }
+
+  /** The net is connected to + through closed contacts (a live wire on the drawing). */
+  netLive(net: number): boolean {
+    return this.live[net] === 1;
   }
 
   get hasSupply(): boolean {
@@ -150,6 +157,7 @@ export class ControlCircuit implements ControlNetwork {
     const fromZero = this.reach(this.zero, false);
     let shorted = false;
     for (let n = 0; n < this.netCount; n += 1) if (fromPlus[n] && fromZero[n]) shorted = true;
+    this.live = shorted ? new Uint8Array(this.netCount) : fromPlus;
     if (shorted !== this.shorted) {
       this.shorted = shorted;
       api.event(shorted ? 'short-circuit' : 'short-circuit-cleared', shorted ? 'closed path from + to 0 V without a load: every load drops out' : undefined);

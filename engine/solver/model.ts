@@ -62,6 +62,8 @@ export interface SolverModel {
   portNodes: Array<{ signal: string; node: number }>;
   /** Component id and tag lookup, for inputs given by either. */
   componentIds: Map<string, number>;
-  /** The electrical control network: the owners of contacts that changed since last asked. */
-  control: { drainChanged(): string[] };
+  /** The electrical control network: the owners of contacts that changed since last asked, and which nets carry + potential. */
+  control: { drainChanged(): string[]; netLive(net: number): boolean };
+  /** The net each wire belongs to, for showing which wires are live. */
+  wireNets: Array<{ wireId: string; net: number }>;
 }

@@ -453,6 +453,20 @@ export class Partition {
     this.fValid = false;
   }
 
+  /** The earliest time the partition can still go back to: the start of a step it can undo. */
+  get undoableFrom(): number {
+    return this.undoable ? this.snapTime : this.time;
+  }
+
+  /**
+   * Time up to which the rows written stay as they are whatever happens next. A step that can be
+   * undone may be taken again differently, except a jump at rest: it writes the same constant rows
+   * up to wherever it is taken to.
+   */
+  get settledUntil(): number {
+    return this.undoable && !this.snapQuiescent ? this.snapTime : this.time;
+  }
+
   /** The last step can still be undone (once). */
   canUndo(): boolean {
     return this.undoable;
@@ -472,18 +486,18 @@ export class Partition {
    * short at a guard crossing, then `crossed` lists the guards. `snapshot()` before it and
    * `restore()` after it undo the step.
    */
-  advanceStep(until: number): void {
+  advanceStep(until: number, restUntil = until): void {
     this.crossed = NO_CROSSINGS;
     if (this.quiescent) {
-      this.writeRows(this.time, until, false);
-      this.time = until;
+      this.writeRows(this.time, restUntil, false);
+      this.time = restUntil;
       return;
     }
-    if (this.step(until) === 'continue' && this.time >= until - 1e-12) this.time = until;
+    if (this.step(until, restUntil) === 'continue' && this.time >= until - 1e-12) this.time = until;
   }
 
   /** One accepted step: it may end on a guard crossing, or find the partition at rest (then it jumps to `stop`). */
-  private step(stop: number): 'continue' | 'crossed' | 'quiescent' {
+  private step(stop: number, restStop: number): 'continue' | 'crossed' | 'quiescent' {
     if (this.restart) {
       this.h = Math.min(this.h, this.restartStep());
       this.restart = false;
@@ -567,8 +581,10 @@ export class Partition {
       // Frozen from here on: the little flow left moves no air in the model, so none is reported.
       for (let j = 0; j < this.rIndex.length; j += 1) this.w.flow[this.rIndex[j]!] = 0;
       this.readOutputs(this.outPrev);
-      this.writeRows(this.time, stop, false);
-      this.time = stop;
+      // The step itself may have gone past where a jump at rest is to end.
+      const end = Math.max(restStop, this.time);
+      this.writeRows(this.time, end, false);
+      this.time = end;
       return 'quiescent';
     }
   }

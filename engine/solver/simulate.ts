@@ -63,7 +63,45 @@ export function simulate(model: SolverModel, inputs: readonly InputEvent[], opti
   // Components keep their state (valve positions, relay contacts) in the model they were built into.
   if (ran.has(model)) throw new Error('a compiled model runs once: compile the document again for another run');
   ran.add(model);
-  return new Run(model, options, sink).execute([...inputs].sort((a, b) => a.t - b.t));
+  const run = new Run(model, options, sink);
+  run.begin([...inputs].sort((a, b) => a.t - b.t));
+  run.advance(options.untilS);
+  return run.finish();
+}
+
+/** A run advanced piece by piece, taking inputs as it goes: the editor's live run. */
+export interface SteppedSimulation {
+  readonly intervalS: number;
+  /** Machine time up to which output rows have gone to the sink. */
+  readonly sentUpTo: number;
+  /** The run has reached `untilS`. */
+  readonly finished: boolean;
+  /** Runs on until every part has reached this machine time, sending the rows that are settled. */
+  advance(toS: number): void;
+  /** The earliest machine time an input given now can act at. */
+  earliestInputTime(): number;
+  /** Takes an input at its time, or at the earliest time still open if that is later; returns it as applied. */
+  addInput(input: InputEvent): InputEvent;
+}
+
+/**
+ * Starts a run that is advanced by the caller and can take inputs while it goes. Given the
+ * inputs as they were applied, `simulate` gives the same rows bit for bit: an input arriving
+ * late acts exactly as if it had been known from the start.
+ */
+export function startSimulation(model: SolverModel, options: SimulationOptions, sink: TraceSink, inputs: readonly InputEvent[] = []): SteppedSimulation {
+  if (ran.has(model)) throw new Error('a compiled model runs once: compile the document again for another run');
+  ran.add(model);
+  const run = new Run(model, options, sink);
+  run.begin([...inputs].sort((a, b) => a.t - b.t));
+  return run;
+}
+
+/** First index at or after `from` whose input comes after time t (inputs at equal times keep their order). */
+function upperBound(inputs: readonly InputEvent[], t: number, from: number): number {
+  let i = from;
+  while (i < inputs.length && inputs[i]!.t <= t) i += 1;
+  return i;
 }
 
 const ran = new WeakSet<SolverModel>();
@@ -83,7 +121,7 @@ function includes(list: ArrayLike<number>, value: number): boolean {
  * more than one step beyond the earliest pending instant, and can undo that step
  * when a newly found crossing or a new timer turns out to touch it.
  */
-class Run implements GuardSource, OutputRows {
+class Run implements GuardSource, OutputRows, SteppedSimulation {
   private readonly m: SolverModel;
   private readonly w: World;
   private readonly partitions: Partition[];
@@ -120,7 +158,7 @@ class Run implements GuardSource, OutputRows {
   private crossing: number[] = [];
   private readonly crossTouch: Array<readonly number[]>;
   /** Times of the inputs that touch each partition, and the next one not yet handled. */
-  private readonly inputTimes: Float64Array[];
+  private readonly inputTimes: number[][];
   private readonly inputNext: Int32Array;
   private inputs: InputEvent[] = [];
   private inputCursor = 0;
@@ -128,6 +166,8 @@ class Run implements GuardSource, OutputRows {
   private readonly synced: Uint8Array;
   private syncedList: number[] = [];
   private handling = false;
+  finished = false;
+  private sample = new Float64Array(0);
   readonly intervalS: number;
   /** Ring of pending output rows; row k lives at k mod PENDING_ROWS while firstPending ≤ k < firstPending + PENDING_ROWS. */
   private readonly pending: Float64Array[] = [];
@@ -140,6 +180,8 @@ class Run implements GuardSource, OutputRows {
   /** How many signals each behaviour has, and where they start in a trace row. */
   private readonly signalCount: number[];
   private readonly signalColumn: Int32Array;
+  /** Where the wires' live flags start in a trace row. */
+  private wireColumn = 0;
   /**
    * The columns no partition fills, kept up to date: behaviour signals as of each behaviour's
    * last action (or its contacts' last change), boundary pressures and flows when rows are sent.
@@ -200,7 +242,7 @@ class Run implements GuardSource, OutputRows {
     this.cap = new Float64Array(this.partitions.length);
     this.capDirty = new Uint8Array(this.partitions.length);
     this.crossTouch = this.partitions.map(() => []);
-    this.inputTimes = this.partitions.map(() => new Float64Array(0));
+    this.inputTimes = this.partitions.map(() => []);
     this.inputNext = new Int32Array(this.partitions.length);
     this.synced = new Uint8Array(this.partitions.length);
     this.signalCount = model.behaviours.map((b) => Object.keys(b.behaviour.signals?.() ?? {}).length);
@@ -246,6 +288,7 @@ class Run implements GuardSource, OutputRows {
       this.signalColumn[b] = col;
       col += this.signalCount[b]!;
     });
+    this.wireColumn = col;
     this.constants = new Float64Array(width);
     this.m.behaviours.forEach((_, b) => this.readSignals(b));
     this.partitions.forEach((p, i) => p.setOutputs(columns[i]!.cols, columns[i]!.kinds, columns[i]!.sources, this));
@@ -276,10 +319,12 @@ class Run implements GuardSource, OutputRows {
     }
   }
 
-  execute(inputs: InputEvent[]): Trace {
+  /** Sets up the trace and handles t = 0. */
+  begin(inputs: InputEvent[]): void {
     const names = this.signalNames();
     this.sink.begin(names);
     const sample = new Float64Array(names.length);
+    this.sample = sample;
     this.assignColumns(names.length);
     this.indexInputs(inputs);
     this.touchCaps(Int32Array.from(this.partitions.keys()));
@@ -296,23 +341,80 @@ class Run implements GuardSource, OutputRows {
     this.settle();
     this.endInstant();
     this.record(sample);
+  }
 
+  /**
+   * Runs on until every partition has reached `limit` (or the end of the run), handling every
+   * instant up to it. Stopping and going on again changes nothing in the result: the loop is the
+   * same one, only paused.
+   */
+  advance(limit: number): void {
     const partitions = this.partitions;
-    for (;;) {
+    const sample = this.sample;
+    while (!this.finished) {
       if (this.dirty.length) this.refreshCaps();
       const next = this.nextInstant();
       const behind = this.queue.top();
       const p = partitions[behind];
       if (p && p.time < next - SAME_TIME_S) {
+        if (p.time >= limit - SAME_TIME_S) break;
         p.snapshot();
-        p.advanceStep(Math.min(this.cap[behind]!, this.epochEnd(p.time)));
+        const until = Math.min(this.cap[behind]!, this.epochEnd(p.time));
+        // A partition at rest would jump to the end of its epoch; stopping it at the limit gives the
+        // same (constant) rows and lets them go out now rather than up to an epoch later.
+        p.advanceStep(until, Math.min(until, Math.max(limit, p.time)));
         this.queue.update(behind);
         if (p.crossed.length) this.crossingFound(behind);
         continue;
       }
+      if (next > limit + SAME_TIME_S) break;
       this.handle(next, sample);
-      if (next >= this.untilS - SAME_TIME_S) break;
+      if (next >= this.untilS - SAME_TIME_S) this.finished = true;
     }
+    if (!this.finished) this.flushRows(Math.min(this.nextInstant(), this.settledUntil()), false);
+  }
+
+  /** The earliest time any partition's rows may still change. */
+  private settledUntil(): number {
+    let t = Infinity;
+    for (const p of this.partitions) t = Math.min(t, p.settledUntil);
+    return t;
+  }
+
+  /**
+   * The earliest time an input given now can act at: not before an instant already handled, a
+   * row already sent, or the start of a partition's step that can no longer be undone.
+   */
+  earliestInputTime(): number {
+    let t = Math.max(this.time, this.firstPending * this.intervalS);
+    for (const p of this.partitions) t = Math.max(t, p.undoableFrom);
+    return t;
+  }
+
+  /** Machine time up to which rows have gone to the sink. */
+  get sentUpTo(): number {
+    return (this.firstPending - 1) * this.intervalS;
+  }
+
+  /** Takes an input during the run, at its time or the earliest time still open; returns it as applied. */
+  addInput(input: InputEvent): InputEvent {
+    const applied = { ...input, t: Math.min(Math.max(input.t, this.earliestInputTime()), this.untilS) };
+    const at = upperBound(this.inputs, applied.t, this.inputCursor);
+    this.inputs.splice(at, 0, applied);
+    const b = this.m.componentIds.get(applied.component);
+    if (b === undefined) return applied;
+    for (const p of this.touchOf[b]!) {
+      const times = this.inputTimes[p]!;
+      let i = times.length;
+      while (i > 0 && times[i - 1]! > applied.t) i -= 1;
+      times.splice(i, 0, applied.t);
+    }
+    this.touchCaps(this.touchOf[b]!);
+    return applied;
+  }
+
+  finish(): Trace {
+    const partitions = this.partitions;
     const steps = partitions.reduce((s, q) => s + q.steps, 0);
     const rejectedSteps = partitions.reduce((s, q) => s + q.rejected, 0);
     const stats = { steps, rejectedSteps, massBalanceErrorKg: this.airBudget() - this.initialBudget };
@@ -328,7 +430,7 @@ class Run implements GuardSource, OutputRows {
       if (b === undefined) continue;
       for (const p of this.touchOf[b]!) lists[p]!.push(input.t);
     }
-    lists.forEach((list, p) => (this.inputTimes[p] = Float64Array.from(list)));
+    lists.forEach((list, p) => (this.inputTimes[p] = list));
   }
 
   /** The earliest instant with something to handle: an input, a timer, a crossing, the end of the pending rows. */
@@ -722,6 +824,7 @@ class Run implements GuardSource, OutputRows {
     this.m.behaviours.forEach((b) => {
       for (const key of Object.keys(b.behaviour.signals?.() ?? {})) names.push({ name: `${b.componentId}:${key}`, unit: 'state' });
     });
+    for (const wire of this.m.wireNets) names.push({ name: `${wire.wireId}:live`, unit: 'state' });
     return names;
   }
 
@@ -729,6 +832,7 @@ class Run implements GuardSource, OutputRows {
 
   private record(out: Float64Array): void {
     for (const p of this.partitions) p.ensureFresh();
+    this.sampleBoundaries();
     this.sampleInto(out);
     this.sink.sample(this.time, out);
   }
@@ -737,6 +841,8 @@ class Run implements GuardSource, OutputRows {
   private sampleBoundaries(): void {
     const w = this.w;
     const out = this.constants;
+    // Wires are live or dead as the control circuit last settled, which happens only at instants.
+    this.m.wireNets.forEach((wire, i) => (out[this.wireColumn + i] = this.m.control.netLive(wire.net) ? 1 : 0));
     const ports = this.boundaryPortColumns;
     for (let j = 0; j < ports.length; j += 2) out[ports[j]!] = w.pressure[ports[j + 1]!]!;
     const flows = this.boundaryFlowColumns;
