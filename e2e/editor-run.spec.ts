@@ -71,13 +71,8 @@ test('a run of the largest demo circuit plays on the drawing; frames per second 
 
 test('a new two-hand circuit drawn from the parts list runs: both buttons bring the piston to its end', async ({ page }) => {
   test.setTimeout(120_000);
-  await page.getByTestId('new-circuit').click();
-  const title = `Two-hand from scratch ${Date.now()}`;
-  await page.getByTestId('new-circuit-title').fill(title);
-  await page.getByTestId('new-circuit-submit').click();
-  await page.getByTestId('circuit-link').filter({ hasText: title }).click();
   const editor = new EditorPage(page);
-  await expect(editor.editor()).toBeVisible();
+  await editor.createAndOpen(`Two-hand from scratch ${Date.now()}`);
 
   // Away from the canvas's edges: a connection dragged near an edge pans the view.
   await editor.place('cylinder-double-acting', { x: 380, y: 90 });

@@ -10,13 +10,8 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await expect(page).toHaveURL(/\/circuits$/);
 
   const title = `Editor walk-through ${Date.now()}`;
-  await page.getByTestId('new-circuit').click();
-  await page.getByTestId('new-circuit-title').fill(title);
-  await page.getByTestId('new-circuit-submit').click();
-  await page.getByTestId('circuit-link').filter({ hasText: title }).click();
-
   const editor = new EditorPage(page);
-  await expect(editor.editor()).toBeVisible();
+  await editor.createAndOpen(title);
   await expect(editor.revisionState()).toContainText('Revision 1');
   await expect(editor.summary()).toHaveText('0 components · 0 tubes · 0 wires');
 

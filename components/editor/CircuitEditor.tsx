@@ -12,6 +12,7 @@ import {
   useReactFlow,
   type Connection,
   type EdgeChange,
+  type EdgeTypes,
   type NodeChange,
   type NodeTypes,
 } from '@xyflow/react';
@@ -19,7 +20,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } fro
 import { useStore } from 'zustand';
 import type { CircuitDocument } from '@/engine/document/schema';
 import type { Diagnostic } from '@/engine/solver/model';
-import { symbolGeometry } from '@/components/symbols/geometry';
+import { GRID, symbolGeometry } from '@/components/symbols/geometry';
 import { ChecksPanel } from './ChecksPanel';
 import { PressureLegend } from './run/PressureLegend';
 import { rampColour, rampTopBar } from './run/pressure-ramp';
@@ -30,8 +31,20 @@ import { Hands, handOperationOf } from './run/hands';
 import { frameAt, prepareRun } from './run/run-frame';
 import { useLiveRun } from './run/use-live-run';
 import { ComponentNode } from './ComponentNode';
+import { ConnectionEdge } from './ConnectionEdge';
 import { memoizedChecks, problemsByItem } from './diagnostics';
-import { addComponent, checkConnection, connect, duplicateItems, removeItems } from './document-commands';
+import {
+  addComponent,
+  alignComponents,
+  checkConnection,
+  connect,
+  distributeComponents,
+  duplicateItems,
+  mirrorComponents,
+  removeItems,
+  rotateComponents,
+} from './document-commands';
+import { EdgeEditingContext } from './edge-context';
 import { createEditorStore, type EditorStore } from './editor-store';
 import { EditorToolbar } from './EditorToolbar';
 import { Inspector } from './Inspector';
@@ -41,7 +54,7 @@ import { Palette, PALETTE_DRAG_TYPE } from './Palette';
 import { SaveRevisionForm, type SavedRevision } from './SaveRevisionForm';
 
 const NODE_TYPES: NodeTypes = { component: ComponentNode };
-const GRID = 10;
+const EDGE_TYPES: EdgeTypes = { connection: ConnectionEdge };
 
 export interface EditorCircuit {
   id: string;
@@ -97,7 +110,7 @@ function EditorFrame({
   const [restoredAt, setRestoredAt] = useState<string | null>(restoredFrom);
   const [paletteOpen, setPaletteOpen] = useState(false);
   const [detailsOpen, setDetailsOpen] = useState(false);
-  const [hoveredTube, setHoveredTube] = useState<string | null>(null);
+  const [hovered, setHovered] = useState<string | null>(null);
   // The plot takes room from the drawing, so it opens on request.
   const [plotOpen, setPlotOpen] = useState(false);
   // Fit a drawing that has parts when it opens; an empty one starts at 100 % (fitting its first part would zoom far in).
@@ -114,22 +127,33 @@ function EditorFrame({
   const run = useLiveRun();
   const running = run.status !== 'stopped';
   const editable = canEdit && !running;
-  const prepared = useMemo(() => (run.trace ? prepareRun(run.trace, document) : null), [document, run.trace]);
-  const frame = useMemo(() => (running && prepared ? frameAt(prepared, run.t) : null), [prepared, run.t, running]);
+  // The signal names stay the same through a run, so the columns each part reads are worked out once.
+  const signalNames = run.trace?.names;
+  const prepared = useMemo(() => (signalNames ? prepareRun(signalNames, document, run.tubeFlows) : null), [document, run.tubeFlows, signalNames]);
+  const frame = useMemo(() => (running && prepared && run.trace ? frameAt(prepared, run.trace, run.t) : null), [prepared, run.t, run.trace, running]);
   const topBar = rampTopBar(frame?.highestBar ?? 0);
   const nodes = useMemo(() => nodesOf(document, selection, problems), [document, selection, problems]);
   const edges = useMemo(() => {
     const drawn = edgesOf(document, running ? { components: [], tubes: [], wires: [] } : selection, problems);
     if (!frame) return drawn;
-    // During a run each tube takes the colour of its pressure.
+    const readOut = (label: string) => ({ label, labelBgPadding: [4, 2] as [number, number], labelBgBorderRadius: 3 });
     return drawn.map((e) => {
+      // A live wire is drawn heavier, solid and amber; a dead one thin and dashed (told apart without colour).
+      if (e.data?.kind === 'wire') {
+        const live = frame.liveWires.has(e.id);
+        const styled = { ...e, className: `${e.className ?? ''} ${live ? 'airproof-wire-live' : 'airproof-wire-dead'}`, data: { ...e.data, live } };
+        return e.id === hovered ? { ...styled, ...readOut(live ? 'live (+)' : 'no voltage') } : styled;
+      }
+      // During a run each tube takes the colour of its pressure.
       const bar = frame.tubeBar.get(e.id);
       if (bar === undefined) return e;
       const styled = { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 } };
-      // The tube under the pointer says its pressure.
-      return e.id === hoveredTube ? { ...styled, label: `${bar.toFixed(2)} bar (gauge)`, labelBgPadding: [4, 2] as [number, number], labelBgBorderRadius: 3 } : styled;
+      if (e.id !== hovered) return styled;
+      // The tube under the pointer says its pressure, and the air going into it at its first end.
+      const flow = frame.tubeFlow.get(e.id);
+      return { ...styled, ...readOut(`${bar.toFixed(2)} bar (gauge)${flow === undefined ? '' : ` · ${flow.toFixed(1)} l/min (ANR)`}`) };
     });
-  }, [document, frame, hoveredTube, problems, running, selection, topBar]);
+  }, [document, frame, hovered, problems, running, selection, topBar]);
 
   const [hands] = useState(() => new Hands());
   const { act, status: runStatus } = run;
@@ -137,6 +161,7 @@ function EditorFrame({
     () => ({
       running,
       states: frame?.components ?? new Map(),
+      portBar: frame?.portBar ?? new Map(),
       actuate: (componentId, phase, keep = false) => {
         const component = document.components.find((c) => c.id === componentId);
         const operation = component ? handOperationOf(component) : null;
@@ -237,6 +262,14 @@ function EditorFrame({
     store.getState().select({ components: [], tubes: [], wires: [] });
   }, [store]);
 
+  const editSelectedParts = useCallback(
+    (label: string, recipe: (draft: CircuitDocument, ids: readonly string[]) => void) => {
+      const ids = store.getState().selection.components;
+      if (ids.length) store.getState().edit(label, (d) => recipe(d, ids));
+    },
+    [store],
+  );
+
   const addAt = useCallback(
     (typeId: string, centre: { x: number; y: number }) => {
       // The part lands centred on the point, on the grid.
@@ -268,14 +301,22 @@ function EditorFrame({
     [addAt, canEdit, flow],
   );
 
-  // Undo and redo from the keyboard, except while typing in a field or during a run.
+  // Editing keys, except while typing in a field or during a run.
   useEffect(() => {
     if (!editable) return;
     const onKey = (event: KeyboardEvent) => {
       const target = event.target as HTMLElement | null;
       if (target?.closest('input, textarea, select, [contenteditable="true"]')) return;
-      if (!(event.ctrlKey || event.metaKey)) return;
       const key = event.key.toLowerCase();
+      if (!(event.ctrlKey || event.metaKey)) {
+        // A letter with Alt belongs to the browser or the system.
+        if (event.altKey) return;
+        if (key === 'r') editSelectedParts('Turn', (d, ids) => rotateComponents(d, ids, event.shiftKey ? -1 : 1));
+        else if (key === 'f') editSelectedParts('Flip', mirrorComponents);
+        else return;
+        event.preventDefault();
+        return;
+      }
       if (key === 'z' && !event.shiftKey) store.getState().undo();
       else if ((key === 'z' && event.shiftKey) || key === 'y') store.getState().redo();
       else if (key === 'd') duplicateSelected();
@@ -288,7 +329,7 @@ function EditorFrame({
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [duplicateSelected, editable, pasteFrom, store]);
+  }, [duplicateSelected, editSelectedParts, editable, pasteFrom, store]);
 
   const onSaved = (revision: SavedRevision) => {
     setSaved({ lockVersion: revision.lockVersion, number: revision.number });
@@ -299,7 +340,8 @@ function EditorFrame({
     setNotice(`Saved as revision ${revision.number}.`);
   };
 
-  const summary = `${document.components.length} components · ${document.tubes.length} tubes · ${document.wires.length} wires`;
+  const counted = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
+  const summary = [counted(document.components.length, 'component'), counted(document.tubes.length, 'tube'), counted(document.wires.length, 'wire')].join(' · ');
 
   return (
     <div className="flex h-[calc(100dvh-11rem)] min-h-[28rem] flex-col overflow-hidden rounded-lg border border-rule bg-paper-raised" data-testid="circuit-editor">
@@ -316,6 +358,11 @@ function EditorFrame({
         onDelete={removeSelected}
         onDuplicate={duplicateSelected}
         canDuplicate={selection.components.length > 0}
+        partsSelected={selection.components.length}
+        onTurn={() => editSelectedParts('Turn', (d, ids) => rotateComponents(d, ids, 1))}
+        onFlip={() => editSelectedParts('Flip', mirrorComponents)}
+        onAlign={(how) => editSelectedParts('Align', (d, ids) => alignComponents(d, ids, how))}
+        onDistribute={(axis) => editSelectedParts('Space out', (d, ids) => distributeComponents(d, ids, axis))}
         onFit={() => void flow.fitView({ padding: 0.2, duration: 200 })}
         onSave={() => setSaving(true)}
         onTogglePalette={() => setPaletteOpen((open) => !open)}
@@ -328,7 +375,9 @@ function EditorFrame({
         t={run.t}
         speed={run.speed}
         message={run.message}
-        computeMs={run.computeMs}
+        pace={run.pace}
+        waiting={run.waiting}
+        limitS={run.limitS}
         canRun={document.components.length > 0 && !checks.some((c) => c.severity === 'error')}
         onStart={() => {
           store.getState().select({ components: [], tubes: [], wires: [] });
@@ -392,16 +441,18 @@ function EditorFrame({
         ) : null}
         <div ref={canvasRef} className="airproof-canvas relative min-w-0 flex-1" onDragOver={(e) => e.preventDefault()} onDrop={onDrop} data-testid="canvas">
           <RunContext.Provider value={runView}>
+          <EdgeEditingContext.Provider value={editable ? store : null}>
           <ReactFlow<ComponentFlowNode, ConnectionFlowEdge>
             nodes={nodes}
             edges={edges}
             nodeTypes={NODE_TYPES}
+            edgeTypes={EDGE_TYPES}
             onNodesChange={onNodesChange}
             onEdgesChange={onEdgesChange}
             onNodeDragStop={() => store.getState().endDrag()}
             onConnect={onConnect}
-            onEdgeMouseEnter={(_, edge) => setHoveredTube(edge.id)}
-            onEdgeMouseLeave={() => setHoveredTube(null)}
+            onEdgeMouseEnter={(_, edge) => setHovered(edge.id)}
+            onEdgeMouseLeave={() => setHovered(null)}
             isValidConnection={isValidConnection}
             onDelete={removeSelected}
             connectionMode={ConnectionMode.Loose}
@@ -427,8 +478,9 @@ function EditorFrame({
             <Controls showInteractive={false} position="bottom-right" />
             <MiniMap pannable zoomable position="top-right" style={{ width: 150, height: 100 }} className="!hidden sm:!block" ariaLabel="Overview of the drawing" />
           </ReactFlow>
+          </EdgeEditingContext.Provider>
           </RunContext.Provider>
-          {frame ? <PressureLegend topBar={topBar} /> : null}
+          {frame ? <PressureLegend topBar={topBar} wires={document.wires.length > 0} /> : null}
           {document.components.length === 0 ? (
             <div className="pointer-events-none absolute inset-0 flex items-center justify-center p-6 text-center text-sm text-ink-soft">
               {canEdit ? 'Empty drawing: pick a part from the list, or drag it here.' : 'This revision has no components yet.'}

@@ -1,8 +1,9 @@
 'use client';
 
-import { Handle, Position, type NodeProps } from '@xyflow/react';
-import { memo, useContext } from 'react';
+import { Handle, Position, useUpdateNodeInternals, type NodeProps } from '@xyflow/react';
+import { memo, useContext, useEffect, useRef } from 'react';
 import { symbolGeometry } from '@/components/symbols/geometry';
+import { placedGeometry, placementTransform } from '@/components/symbols/placement';
 import { SymbolFor } from '@/components/symbols/SymbolFor';
 import { componentTypeById } from '@/engine/components/registry';
 import type { ComponentFlowNode } from './flow-mapping';
@@ -11,11 +12,21 @@ import { handOperationOf } from './run/hands';
 
 const SIDE_TO_POSITION = { top: Position.Top, right: Position.Right, bottom: Position.Bottom, left: Position.Left } as const;
 
-/** A placed component on the canvas: its symbol, and one handle per port at the symbol's anchor. */
+/** A placed component on the canvas: its symbol turned and mirrored as placed, and one handle per port at its placed anchor. */
 export const ComponentNode = memo(function ComponentNode({ data, selected }: NodeProps<ComponentFlowNode>) {
   const { component, problem } = data;
   const type = componentTypeById(component.type);
   const geometry = symbolGeometry(component.type);
+  const placed = placedGeometry(component.type, component);
+  // The canvas measures handles again only when a node changes size, which a half turn or a flip does not.
+  const updateNodeInternals = useUpdateNodeInternals();
+  const placement = `${component.rotation}${component.mirrored ? ' mirrored' : ''}`;
+  const measuredAs = useRef(placement);
+  useEffect(() => {
+    if (measuredAs.current === placement) return;
+    measuredAs.current = placement;
+    updateNodeInternals(component.id);
+  }, [component.id, placement, updateNodeInternals]);
   const run = useContext(RunContext);
   const shown = run.running ? run.states.get(component.id) : undefined;
   const workable = run.running && handOperationOf(component) !== null;
@@ -28,28 +39,36 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
       data-extension={shown?.extension?.toFixed(3)}
       data-active-position={shown?.activePosition}
       className={`relative text-ink ${workable ? 'cursor-pointer ' : ''}${selected ? 'rounded-sm outline-2 outline-offset-4 outline-accent' : problem ? `rounded-sm outline-2 outline-offset-4 outline-dashed ${problem === 'error' ? 'outline-danger' : 'outline-caution'}` : ''}`}
-      style={{ width: geometry.width, height: geometry.height }}
+      style={{ width: placed.width, height: placed.height }}
       data-testid="canvas-component"
       data-component-id={component.id}
       data-tag={component.tag}
       data-problem={problem}
       title={`${component.tag} · ${type?.label ?? component.type}`}
     >
-      <SymbolFor
-        typeId={component.type}
-        parameters={component.parameters}
-        tag={component.tag}
-        activePosition={shown?.activePosition}
-        extension={shown?.extension}
-        energised={shown?.energised}
-        state={shown?.state}
-      />
+      <div
+        className="absolute top-0 left-0"
+        style={{ width: geometry.width, height: geometry.height, transform: placementTransform(geometry, component), transformOrigin: '0 0' }}
+      >
+        <SymbolFor
+          typeId={component.type}
+          parameters={component.parameters}
+          tag={component.tag}
+          activePosition={shown?.activePosition}
+          extension={shown?.extension}
+          energised={shown?.energised}
+          state={shown?.state}
+        />
+      </div>
       {(type?.ports ?? []).map((port) => {
-        const anchor = geometry.ports[port.id];
+        const anchor = placed.ports[port.id];
         if (!anchor) return null;
+        const bar = run.running ? run.portBar.get(`${component.id}:${port.id}`) : undefined;
         return (
           <Handle
             key={port.id}
+            title={bar === undefined ? undefined : `${component.tag} port ${port.label ?? port.id}: ${bar.toFixed(2)} bar (gauge)`}
+            data-bar={bar?.toFixed(3)}
             id={port.id}
             type="source"
             position={SIDE_TO_POSITION[anchor.side]}

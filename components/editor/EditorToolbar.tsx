@@ -1,6 +1,7 @@
 'use client';
 
 import { Button } from '@/components/ui/Button';
+import type { Alignment, DistributionAxis } from './document-commands';
 
 const SHORTCUTS: ReadonlyArray<readonly [string, string]> = [
   ['Ctrl+Z', 'Undo'],
@@ -8,11 +9,27 @@ const SHORTCUTS: ReadonlyArray<readonly [string, string]> = [
   ['Delete, Backspace', 'Remove the selection'],
   ['Ctrl+D', 'Duplicate the selected parts'],
   ['Ctrl+C, Ctrl+V', 'Copy the selected parts, paste them'],
+  ['R, Shift+R', 'Turn the selected parts clockwise, anticlockwise'],
+  ['F', 'Flip the selected parts left to right'],
   ['Shift+click', 'Add to the selection'],
   ['Drag on empty canvas', 'Select with a frame'],
   ['Right or middle drag, wheel', 'Pan'],
   ['Ctrl+wheel, pinch', 'Zoom'],
   ['Drag port to port', 'Join with a tube or wire'],
+];
+
+const LINE_UPS: ReadonlyArray<readonly [Alignment, string]> = [
+  ['left', 'Left edges'],
+  ['centre', 'Centres, one above another'],
+  ['right', 'Right edges'],
+  ['top', 'Top edges'],
+  ['middle', 'Middles, side by side'],
+  ['bottom', 'Bottom edges'],
+];
+
+const SPREADS: ReadonlyArray<readonly [DistributionAxis, string]> = [
+  ['horizontal', 'Evenly, left to right'],
+  ['vertical', 'Evenly, top to bottom'],
 ];
 
 interface EditorToolbarProps {
@@ -30,13 +47,19 @@ interface EditorToolbarProps {
   onDelete: () => void;
   onDuplicate: () => void;
   canDuplicate: boolean;
+  /** How many parts (not tubes or wires) are selected: turning needs one, aligning two, spreading three. */
+  partsSelected: number;
+  onTurn: () => void;
+  onFlip: () => void;
+  onAlign: (how: Alignment) => void;
+  onDistribute: (axis: DistributionAxis) => void;
   onFit: () => void;
   onSave: () => void;
   onTogglePalette: () => void;
   onToggleDetails: () => void;
 }
 
-/** Title, revision state and the drawing commands. Keyboard: Ctrl+Z undo, Ctrl+Shift+Z or Ctrl+Y redo, Delete removes. */
+/** Title, revision state and the drawing commands. Keyboard: Ctrl+Z undo, Ctrl+Shift+Z or Ctrl+Y redo, Delete removes, R turns, F flips. */
 export function EditorToolbar(props: EditorToolbarProps) {
   const { title, revisionNumber, unsaved, canEdit } = props;
   return (
@@ -67,6 +90,44 @@ export function EditorToolbar(props: EditorToolbarProps) {
           <Button size="sm" variant="quiet" onClick={props.onDelete} disabled={!props.hasSelection} title="Remove the selection (Delete)" data-testid="delete">
             Remove
           </Button>
+          <Button size="sm" variant="quiet" onClick={props.onTurn} disabled={props.partsSelected === 0} title="Turn the selected parts a quarter turn clockwise (R; Shift+R turns back)" data-testid="turn-selection">
+            Turn
+          </Button>
+          <Button size="sm" variant="quiet" onClick={props.onFlip} disabled={props.partsSelected === 0} title="Flip the selected parts left to right (F)" data-testid="flip-selection">
+            Flip
+          </Button>
+          <select
+            // Always shows its prompt: picking an entry applies it once, like a button.
+            value=""
+            onChange={(e) => {
+              const [kind, what] = e.target.value.split(':');
+              if (kind === 'align') props.onAlign(what as Alignment);
+              else if (kind === 'spread') props.onDistribute(what as DistributionAxis);
+            }}
+            disabled={props.partsSelected < 2}
+            aria-label="Align the selected parts"
+            title="Line up the selected parts, or space them evenly"
+            className="h-8 rounded-md border border-rule bg-paper-raised px-1 text-sm text-ink-soft disabled:cursor-not-allowed disabled:opacity-60"
+            data-testid="align-selection"
+          >
+            <option value="" disabled>
+              Align…
+            </option>
+            <optgroup label="Line up">
+              {LINE_UPS.map(([how, label]) => (
+                <option key={how} value={`align:${how}`}>
+                  {label}
+                </option>
+              ))}
+            </optgroup>
+            <optgroup label="Space out (three or more)">
+              {SPREADS.map(([axis, label]) => (
+                <option key={axis} value={`spread:${axis}`} disabled={props.partsSelected < 3}>
+                  {label}
+                </option>
+              ))}
+            </optgroup>
+          </select>
         </>
       ) : null}
       <Button size="sm" variant="quiet" className="lg:hidden" onClick={props.onToggleDetails} aria-expanded={props.detailsOpen} data-testid="toggle-details">

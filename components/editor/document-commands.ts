@@ -1,6 +1,8 @@
+import { GRID } from '@/components/symbols/geometry';
+import { placedGeometry, type Rotation } from '@/components/symbols/placement';
 import { componentTypeById } from '@/engine/components/registry';
 import type { PortRole } from '@/engine/components/types';
-import type { CircuitDocument } from '@/engine/document/schema';
+import type { CircuitComponent, CircuitDocument } from '@/engine/document/schema';
 import { nextTag } from './tags';
 
 /**
@@ -41,6 +43,83 @@ export function moveComponents(draft: CircuitDocument, moves: ReadonlyArray<{ id
     const component = byId.get(move.id);
     if (component) component.position = { x: move.x, y: move.y };
   }
+}
+
+/**
+ * Turns components clockwise by quarter turns (negative turns go anticlockwise), each about its
+ * own centre: a part whose box changes shape moves so that its centre stays, to the nearest grid
+ * point.
+ */
+export function rotateComponents(draft: CircuitDocument, ids: readonly string[], quarterTurns: number): void {
+  const turns = ((quarterTurns % 4) + 4) % 4;
+  if (turns === 0) return;
+  // Rounded alike either way, so turning back puts the part exactly where it was.
+  const shift = (d: number) => Math.sign(d) * snap(Math.abs(d));
+  for (const { component, width, height } of placedBoxes(draft, ids)) {
+    component.rotation = ((component.rotation + 90 * turns) % 360) as Rotation;
+    const swapped = turns % 2 === 1;
+    placeAlong(component, 'x', snap(component.position.x) + (swapped ? shift((width - height) / 2) : 0));
+    placeAlong(component, 'y', snap(component.position.y) + (swapped ? shift((height - width) / 2) : 0));
+  }
+}
+
+/**
+ * Flips components left to right as they appear, each about its own upright centre line. The
+ * document mirrors a symbol before turning it, so a part standing at a quarter turn also takes
+ * the opposite turn; its box keeps its size and place.
+ */
+export function mirrorComponents(draft: CircuitDocument, ids: readonly string[]): void {
+  const wanted = new Set(ids);
+  for (const component of draft.components.filter((c) => wanted.has(c.id))) {
+    component.mirrored = !component.mirrored;
+    component.rotation = ((360 - component.rotation) % 360) as Rotation;
+  }
+}
+
+export type Alignment = 'left' | 'centre' | 'right' | 'top' | 'middle' | 'bottom';
+
+/** The axis an alignment moves parts along, and the point of each box it lines up (0 start, 1 end). */
+const ALIGNMENTS: Readonly<Record<Alignment, { axis: 'x' | 'y'; at: number }>> = {
+  left: { axis: 'x', at: 0 },
+  centre: { axis: 'x', at: 0.5 },
+  right: { axis: 'x', at: 1 },
+  top: { axis: 'y', at: 0 },
+  middle: { axis: 'y', at: 0.5 },
+  bottom: { axis: 'y', at: 1 },
+};
+
+/**
+ * Lines up two or more components by their placed boxes: their left edges on the leftmost,
+ * right edges on the rightmost, centres on the middle of the whole selection (and the same up
+ * and down). Fewer than two parts is no edit.
+ */
+export function alignComponents(draft: CircuitDocument, ids: readonly string[], how: Alignment): void {
+  const boxes = placedBoxes(draft, ids);
+  if (boxes.length < 2) return;
+  const { axis, at } = ALIGNMENTS[how];
+  const size = axis === 'x' ? 'width' : 'height';
+  const start = Math.min(...boxes.map((b) => b.component.position[axis]));
+  const end = Math.max(...boxes.map((b) => b.component.position[axis] + b[size]));
+  const line = start + (end - start) * at;
+  for (const box of boxes) placeAlong(box.component, axis, snap(line - box[size] * at));
+}
+
+export type DistributionAxis = 'horizontal' | 'vertical';
+
+/**
+ * Spaces the centres of three or more components evenly along an axis between the two outermost,
+ * which stay where they are. Fewer than three parts is no edit.
+ */
+export function distributeComponents(draft: CircuitDocument, ids: readonly string[], axis: DistributionAxis): void {
+  const boxes = placedBoxes(draft, ids);
+  if (boxes.length < 3) return;
+  const along = axis === 'horizontal' ? 'x' : 'y';
+  const size = axis === 'horizontal' ? 'width' : 'height';
+  const centre = (box: PlacedBox) => box.component.position[along] + box[size] / 2;
+  const ordered = boxes.sort((a, b) => centre(a) - centre(b));
+  const first = centre(ordered[0]!);
+  const step = (centre(ordered[ordered.length - 1]!) - first) / (ordered.length - 1);
+  ordered.forEach((box, i) => placeAlong(box.component, along, snap(first + step * i - box[size] / 2)));
 }
 
 export interface ItemSelection {
@@ -147,6 +226,28 @@ export function connect(draft: CircuitDocument, a: PortRef, b: PortRef): { ok: t
   return { ok: true, id };
 }
 
+const snap = (value: number) => Math.round(value / GRID) * GRID;
+
+interface PlacedBox {
+  component: CircuitComponent;
+  width: number;
+  height: number;
+}
+
+/** The components named, in document order, each with the size of its box as placed. */
+function placedBoxes(draft: CircuitDocument, ids: readonly string[]): PlacedBox[] {
+  const wanted = new Set(ids);
+  return draft.components.filter((c) => wanted.has(c.id)).map((component) => {
+    const { width, height } = placedGeometry(component.type, component);
+    return { component, width, height };
+  });
+}
+
+// Writing only what changes keeps an edit that moves nothing out of the undo history.
+function placeAlong(component: CircuitComponent, axis: 'x' | 'y', value: number): void {
+  if (component.position[axis] !== value) component.position[axis] = value;
+}
+
 function roleOf(document: CircuitDocument, ref: PortRef): PortRole | undefined {
   const component = document.components.find((c) => c.id === ref.component);
   const type = component ? componentTypeById(component.type) : undefined;
@@ -161,4 +262,19 @@ function freeId(document: CircuitDocument, typeId: string): string {
 function freeConnectionId(document: CircuitDocument, prefix: string): string {
   const taken = new Set([...document.tubes, ...document.wires].map((c) => c.id));
   for (let n = 1; ; n += 1) if (!taken.has(`${prefix}${n}`)) return `${prefix}${n}`;
+}
+
+/** The most bends the document schema lets a tube or wire keep. */
+const MOST_BENDS = 64;
+
+/**
+ * Sets the bends a tube or wire is drawn through (canvas points, in order from its `from` end).
+ * An unknown id, the same bends again or more than the document keeps is no edit.
+ */
+export function setBends(draft: CircuitDocument, kind: 'tube' | 'wire', id: string, bends: ReadonlyArray<{ x: number; y: number }>): void {
+  const connections: Array<{ id: string; bends: Array<{ x: number; y: number }> }> = kind === 'tube' ? draft.tubes : draft.wires;
+  const connection = connections.find((c) => c.id === id);
+  if (!connection || bends.length > MOST_BENDS) return;
+  const same = connection.bends.length === bends.length && connection.bends.every((b, i) => b.x === bends[i]!.x && b.y === bends[i]!.y);
+  if (!same) connection.bends = bends.map(({ x, y }) => ({ x, y }));
 }

@@ -24,6 +24,9 @@ export interface SymbolGeometry {
   readonly ports: Readonly<Record<string, PortAnchor>>;
 }
 
+/** The drawing grid in canvas units: symbol boxes, anchors and component positions sit on it. */
+export const GRID = 10;
+
 /** Room a timing unit (throttle, check valve, reservoir) takes left of a time-delay valve. */
 export const TIMER_ROOM = 50;
 

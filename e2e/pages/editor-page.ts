@@ -52,6 +52,15 @@ export class EditorPage {
     await expect(this.page.getByTestId('editor-notice')).toContainText('Saved as revision');
   }
 
+  /** Creates a circuit from the circuits list (the page must show it) and opens it in the editor. */
+  async createAndOpen(title: string): Promise<void> {
+    await this.page.getByTestId('new-circuit').click();
+    await this.page.getByTestId('new-circuit-title').fill(title);
+    await this.page.getByTestId('new-circuit-submit').click();
+    await this.page.getByTestId('circuit-link').filter({ hasText: title }).click();
+    await expect(this.editor()).toBeVisible();
+  }
+
   /** Opens a circuit by its title through the API (the list pages; tests add circuits of their own). */
   async openByTitle(title: string): Promise<void> {
     const list = (await this.page.evaluate(() => fetch('/api/circuits?pageSize=100').then((r) => r.json()))) as { items: Array<{ id: string; title: string }> };

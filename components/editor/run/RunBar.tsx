@@ -1,14 +1,19 @@
 'use client';
 
 import { Button } from '@/components/ui/Button';
-import { RUN_HORIZON_S, RUN_SPEEDS, type RunStatus } from './use-live-run';
+import { RUN_SPEEDS, type RunStatus } from './use-live-run';
 
 interface RunBarProps {
   status: RunStatus;
   t: number;
   speed: (typeof RUN_SPEEDS)[number];
   message: string | null;
-  computeMs: number | null;
+  /** Machine seconds the engine simulates per second of its work. */
+  pace: number | null;
+  /** The playback waits for the engine. */
+  waiting: boolean;
+  /** How long the run may go on, s. */
+  limitS: number;
   canRun: boolean;
   onStart: () => void;
   onPause: () => void;
@@ -72,12 +77,26 @@ export function RunBar(props: RunBarProps) {
         </Button>
       ) : null}
       <output className="value text-ink" data-testid="run-time" data-t={t.toFixed(3)} aria-live="off">
-        t = {t.toFixed(2)} s <span className="text-ink-faint">of {RUN_HORIZON_S} s</span>
+        t = {t.toFixed(2)} s <span className="text-ink-faint">of at most {props.limitS} s</span>
       </output>
       <span className="text-ink-soft" role="status">
-        {status === 'starting' ? 'Working out the run…' : status === 'ended' ? 'End of the simulated time.' : status === 'failed' ? props.message : active ? 'Click or hold buttons on the drawing to work them; Shift+click keeps a button pressed.' : null}
+        {status === 'starting'
+          ? 'Starting the engine…'
+          : status === 'ended'
+            ? `End of the run (the longest run of this drawing is ${props.limitS} s).`
+            : status === 'failed'
+              ? props.message
+              : props.waiting
+                ? 'Waiting for the engine…'
+                : active
+                  ? 'Click or hold buttons on the drawing to work them; Shift+click keeps a button pressed.'
+                  : null}
       </span>
-      {props.computeMs !== null && active ? <span className="ml-auto text-xs text-ink-faint">computed in {Math.round(props.computeMs)} ms</span> : null}
+      {props.pace !== null && active ? (
+        <span className="ml-auto text-xs text-ink-faint" data-testid="run-pace" title="Machine time the engine simulates per second of its own work">
+          engine at {props.pace >= 10 ? Math.round(props.pace) : props.pace.toFixed(1)}× real time
+        </span>
+      ) : null}
     </div>
   );
 }

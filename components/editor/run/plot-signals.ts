@@ -20,7 +20,9 @@ export function plotSignals(trace: RunTrace, document: CircuitDocument): PlotSig
   const out: PlotSignal[] = [];
   for (const name of trace.names) {
     const [id, kind, port] = name.split(':') as [string, string, string | undefined];
-    const tag = tags.get(id) ?? id;
+    // Wires' live flags are for the drawing; the plot is about parts.
+    const tag = tags.get(id);
+    if (tag === undefined) continue;
     if (kind === 'p' && port !== undefined) out.push({ name, label: `${tag} port ${port}`, unit: 'bar (gauge)', fromSi: (pa) => (pa - ambient) / 1e5 });
     else if (kind === 'x') out.push({ name, label: `${tag} position`, unit: 'mm', fromSi: (m) => m * 1000 });
     else if (kind === 'v') out.push({ name, label: `${tag} speed`, unit: 'mm/s', fromSi: (ms) => ms * 1000 });
@@ -29,12 +31,15 @@ export function plotSignals(trace: RunTrace, document: CircuitDocument): PlotSig
   return out;
 }
 
-/** The whole run as CSV: time in s, then every signal in SI units as the trace holds it. */
+/**
+ * The run so far as CSV: time in s, then every signal in SI units. The page keeps values in single
+ * precision, so they are written to the seven significant digits that holds (not the float's noise).
+ */
 export function runCsv(trace: RunTrace): string {
   const header = ['time_s', ...trace.names].join(',');
   const lines = [header];
   for (let k = 0; k < trace.time.length; k += 1) {
-    lines.push([trace.time[k]!, ...trace.columns.map((c) => c[k]!)].join(','));
+    lines.push([trace.time[k]!, ...trace.columns.map((c) => Number(c[k]!.toPrecision(7)))].join(','));
   }
   return `${lines.join('\n')}\n`;
 }

@@ -7,8 +7,10 @@ import type { ComponentRunState } from './run-frame';
 export interface RunView {
   running: boolean;
   states: ReadonlyMap<string, ComponentRunState>;
+  /** Gauge pressure at each port, bar, keyed `component:port`. */
+  portBar: ReadonlyMap<string, number>;
   /** A pointer went down on or up from a part during the run; `keep` (Shift held) latches a push-button. */
   actuate: (componentId: string, phase: 'down' | 'up', keep?: boolean) => void;
 }
 
-export const RunContext = createContext<RunView>({ running: false, states: new Map(), actuate: () => {} });
+export const RunContext = createContext<RunView>({ running: false, states: new Map(), portBar: new Map(), actuate: () => {} });

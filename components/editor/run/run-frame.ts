@@ -1,13 +1,17 @@
 import { componentTypeById } from '@/engine/components/registry';
 import { parameterDefaults } from '@/engine/components/types';
+import { RHO_0_KG_PER_M3 } from '@/engine/calc/constants';
 import type { CircuitDocument } from '@/engine/document/schema';
+import type { SignedColumn } from './tube-flows';
 
-/** A finished simulation as the page keeps it: one column per signal, rows every `intervalS`. */
+/** A run as the page holds it: one column per signal, rows every `intervalS`. */
 export interface RunTrace {
   intervalS: number;
   time: Float64Array;
   names: string[];
-  columns: Float64Array[];
+  columns: Array<Float32Array | Float64Array>;
+  /** The highest port pressure in these rows, Pa absolute. */
+  highestPa: number;
 }
 
 /** What one component shows at a moment of the run. */
@@ -18,13 +22,23 @@ export interface ComponentRunState {
   state?: string;
 }
 
-/** The drawing at playback time t: component states, and the gauge pressure at every tube, bar. */
+/** The drawing at playback time t. */
 export interface RunFrame {
   t: number;
   components: Map<string, ComponentRunState>;
+  /** Gauge pressure in each tube, bar. */
   tubeBar: Map<string, number>;
+  /** Air entering each tube at its first end, l/min of free air (ISO 8778 reference atmosphere); negative when it flows back. */
+  tubeFlow: Map<string, number>;
+  /** Gauge pressure at every port the run reports, keyed `component:port`, bar. */
+  portBar: Map<string, number>;
+  /** Wires at + potential. */
+  liveWires: Set<string>;
   highestBar: number;
 }
+
+/** kg/s of air to l/min of free air at the ISO 8778 reference atmosphere (1.185 kg/m³). */
+const KG_PER_S_TO_ANR_L_PER_MIN = 60_000 / RHO_0_KG_PER_M3;
 
 /** Where one part's shown state comes from: trace columns by index (-1: the trace has none). */
 interface PartReading {
@@ -39,19 +53,21 @@ interface PartReading {
 }
 
 /**
- * A trace made ready for playback: which columns each part and tube reads, and the run's
- * highest pressure. Worked out once per trace, so that a frame only reads one row.
+ * A run made ready for playback: which columns each part and tube reads. Worked out once per
+ * run (the signal names do not change while it goes on), so that a frame only reads one row.
  */
 export interface PreparedRun {
-  trace: RunTrace;
   parts: PartReading[];
-  tubes: Array<{ id: string; column: number }>;
+  tubes: Array<{ id: string; column: number; flows: readonly SignedColumn[] }>;
+  ports: Array<{ key: string; column: number }>;
+  wires: Array<{ id: string; column: number }>;
   ambientPa: number;
-  highestBar: number;
+  /** The highest supply set pressure, bar gauge: the pressure ramp reaches at least this far. */
+  supplyBar: number;
 }
 
-export function prepareRun(trace: RunTrace, document: CircuitDocument): PreparedRun {
-  const index = new Map(trace.names.map((name, i) => [name, i]));
+export function prepareRun(names: readonly string[], document: CircuitDocument, tubeFlows: Readonly<Record<string, readonly SignedColumn[]>> = {}): PreparedRun {
+  const index = new Map(names.map((name, i) => [name, i]));
   const column = (name: string) => index.get(name) ?? -1;
   const ambientPa = document.settings.ambientPressurePa;
   const parts = document.components.map((c): PartReading => {
@@ -67,19 +83,22 @@ export function prepareRun(trace: RunTrace, document: CircuitDocument): Prepared
       workedState: actuated >= 0 ? 'actuated' : 'operated',
     };
   });
-  const tubes = document.tubes.map((t) => ({ id: t.id, column: column(`${t.from.component}:p:${t.from.port}`) })).filter((t) => t.column >= 0);
-  // The ramp's scale comes from the whole run, so colours do not change meaning as it plays.
-  let highestBar = 0;
-  for (const [i, name] of trace.names.entries()) {
-    if (!name.includes(':p:')) continue;
-    for (const p of trace.columns[i]!) highestBar = Math.max(highestBar, (p - ambientPa) / 1e5);
-  }
-  return { trace, parts, tubes, ambientPa, highestBar };
+  const tubes = document.tubes
+    .map((t) => ({ id: t.id, column: column(`${t.from.component}:p:${t.from.port}`), flows: tubeFlows[t.id] ?? [] }))
+    .filter((t) => t.column >= 0);
+  const ports = names.flatMap((name, i) => {
+    const [component, kind, port] = name.split(':');
+    return kind === 'p' && port !== undefined ? [{ key: `${component}:${port}`, column: i }] : [];
+  });
+  const wires = document.wires.map((w) => ({ id: w.id, column: column(`${w.id}:live`) })).filter((w) => w.column >= 0);
+  // The ramp's scale starts from the supplies' set pressure, so colours keep their meaning as the run
+  // goes on; it grows only if some port goes higher still.
+  const supplyBar = Math.max(0, ...document.components.filter((c) => c.type === 'air-supply').map((c) => Number(c.parameters.pressure ?? 0) / 1e5));
+  return { parts, tubes, ports, wires, ambientPa, supplyBar };
 }
 
-/** Reads a prepared run at time t (the nearest row at or before it), mapped onto the drawing's parts. */
-export function frameAt(run: PreparedRun, t: number): RunFrame {
-  const { trace } = run;
+/** Reads a run at time t (the nearest row at or before it), mapped onto the drawing's parts. */
+export function frameAt(run: PreparedRun, trace: RunTrace, t: number): RunFrame {
   const rows = trace.time.length;
   const k = rows === 0 ? -1 : Math.min(rows - 1, Math.max(0, Math.floor(t / trace.intervalS + 1e-9)));
   const read = (i: number): number | undefined => (i < 0 || k < 0 ? undefined : trace.columns[i]![k]);
@@ -89,11 +108,24 @@ export function frameAt(run: PreparedRun, t: number): RunFrame {
     if (shown) components.set(part.id, shown);
   }
   const tubeBar = new Map<string, number>();
+  const tubeFlow = new Map<string, number>();
   for (const tube of run.tubes) {
     const p = read(tube.column);
     if (p !== undefined) tubeBar.set(tube.id, (p - run.ambientPa) / 1e5);
+    if (tube.flows.length === 0 || k < 0) continue;
+    let kgPerS = 0;
+    for (const [c, sign] of tube.flows) kgPerS += sign * trace.columns[c]![k]!;
+    tubeFlow.set(tube.id, kgPerS * KG_PER_S_TO_ANR_L_PER_MIN);
   }
-  return { t: k < 0 ? 0 : trace.time[k]!, components, tubeBar, highestBar: run.highestBar };
+  const portBar = new Map<string, number>();
+  for (const port of run.ports) {
+    const p = read(port.column);
+    if (p !== undefined) portBar.set(port.key, (p - run.ambientPa) / 1e5);
+  }
+  const liveWires = new Set<string>();
+  for (const wire of run.wires) if ((read(wire.column) ?? 0) > 0.5) liveWires.add(wire.id);
+  const highestBar = Math.max(run.supplyBar, trace.highestPa > 0 ? (trace.highestPa - run.ambientPa) / 1e5 : 0);
+  return { t: k < 0 ? 0 : trace.time[k]!, components, tubeBar, tubeFlow, portBar, liveWires, highestBar };
 }
 
 function partState(part: PartReading, read: (column: number) => number | undefined): ComponentRunState | null {

@@ -2,27 +2,41 @@ import type { CircuitDocument } from '@/engine/document/schema';
 import type { Diagnostic } from '@/engine/solver/model';
 import type { InputEvent } from '@/engine/solver/simulate';
 import type { TraceEvent } from '@/engine/trace/trace';
+import type { SignedColumn } from './tube-flows';
 
-/** Asks the run worker to simulate a drawing from t = 0 with the inputs given so far. */
-export interface SimulateRequest {
-  kind: 'simulate';
-  requestId: number;
-  document: CircuitDocument;
-  inputs: readonly InputEvent[];
-  untilS: number;
-  intervalS: number;
-}
+/** What the page asks of the run worker. One run at a time; messages of an older run are ignored. */
+export type RunRequest =
+  /** Compiles the drawing and stands at t = 0. */
+  | { kind: 'start'; runId: number; document: CircuitDocument; untilS: number; intervalS: number }
+  /** Simulates on until this machine time (the playback time plus a little lead). */
+  | { kind: 'advance'; runId: number; toS: number }
+  /** A hand on the drawing: applied at its time, or the earliest time the run can still change. */
+  | { kind: 'input'; runId: number; input: InputEvent }
+  | { kind: 'stop'; runId: number };
 
-/** The result: one column per signal (typed arrays travel to the page without copying). */
-export type SimulateReply =
+/** What the worker sends back: the signal names once, then rows as they settle. */
+export type RunReply =
   | {
-      kind: 'trace';
-      requestId: number;
-      intervalS: number;
-      time: Float64Array;
+      kind: 'started';
+      runId: number;
       names: string[];
-      columns: Float64Array[];
+      intervalS: number;
+      /** For each tube, the flow columns that sum to the air entering it at its first end. */
+      tubeFlows: Record<string, SignedColumn[]>;
+    }
+  | {
+      kind: 'rows';
+      runId: number;
+      /** Index of the first row in the run. */
+      first: number;
+      time: Float64Array;
+      /** Row after row, `names.length` values each. */
+      values: Float64Array;
       events: TraceEvent[];
+      /** The run has reached its end. */
+      finished: boolean;
+      /** Wall time the engine spent on these rows, ms. */
       computeMs: number;
     }
-  | { kind: 'failed'; requestId: number; message: string; diagnostics: Diagnostic[] };
+  | { kind: 'input-applied'; runId: number; input: InputEvent }
+  | { kind: 'failed'; runId: number; message: string; diagnostics: Diagnostic[] };

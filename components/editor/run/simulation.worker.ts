@@ -1,37 +1,108 @@
 /// <reference lib="webworker" />
 import { compile } from '@/engine/solver/compile';
-import { simulate } from '@/engine/solver/simulate';
-import type { SimulateReply, SimulateRequest } from './run-protocol';
+import { startSimulation, type SteppedSimulation } from '@/engine/solver/simulate';
+import type { SignalUnit, TraceEvent, TraceSink } from '@/engine/trace/trace';
+import type { RunReply, RunRequest } from './run-protocol';
+import { tubeFlowColumns } from './tube-flows';
 
 // The engine runs here, off the page's thread, so the drawing stays responsive while it works.
 declare const self: DedicatedWorkerGlobalScope;
 
-self.onmessage = (event: MessageEvent<SimulateRequest>) => {
-  const request = event.data;
+/** Machine time simulated between looks at the mailbox: keeps inputs and stops prompt when running far ahead. */
+const PIECE_S = 0.25;
+/**
+ * Rows settle a step behind the engine (a part's last step may still be undone), so once the
+ * engine has reached the target it goes on by this much at a time until the rows have too.
+ */
+const NUDGE_S = 0.02;
+
+/** Collects the rows and events that settle during one piece of work, to send them in one message. */
+class Outbox implements TraceSink {
+  names: string[] = [];
+  sent = 0;
+  private time: number[] = [];
+  private values: number[] = [];
+  private events: TraceEvent[] = [];
+
+  begin(signals: ReadonlyArray<{ name: string; unit: SignalUnit }>): void {
+    this.names = signals.map((s) => s.name);
+  }
+
+  sample(t: number, values: Float64Array): void {
+    this.time.push(t);
+    for (let i = 0; i < values.length; i += 1) this.values.push(values[i]!);
+  }
+
+  event(event: TraceEvent): void {
+    this.events.push(event);
+  }
+
+  send(runId: number, finished: boolean, computeMs: number): void {
+    if (this.time.length === 0 && this.events.length === 0 && !finished) return;
+    const time = Float64Array.from(this.time);
+    const values = Float64Array.from(this.values);
+    const reply: RunReply = { kind: 'rows', runId, first: this.sent, time, values, events: this.events, finished, computeMs };
+    self.postMessage(reply, [time.buffer, values.buffer]);
+    this.sent += this.time.length;
+    this.time = [];
+    this.values = [];
+    this.events = [];
+  }
+}
+
+let current: { runId: number; simulation: SteppedSimulation; outbox: Outbox; reached: number; target: number; untilS: number; busy: boolean } | null = null;
+
+/** The rows the page asked for have not all been sent yet. */
+const behind = (run: NonNullable<typeof current>) => !run.simulation.finished && run.simulation.sentUpTo < run.target;
+
+/** Works towards the target a piece at a time, sending what settled after each piece. */
+function pump(): void {
+  const run = current;
+  if (!run || run.busy || !behind(run)) return;
+  run.busy = true;
   const started = performance.now();
-  const { model, diagnostics } = compile(request.document);
-  if (!model) {
-    const reply: SimulateReply = { kind: 'failed', requestId: request.requestId, message: 'The drawing has errors; see Checks.', diagnostics };
+  run.reached = Math.min(run.untilS, run.reached < run.target ? Math.min(run.target, run.reached + PIECE_S) : run.reached + NUDGE_S);
+  try {
+    run.simulation.advance(run.reached);
+  } catch (error) {
+    const reply: RunReply = { kind: 'failed', runId: run.runId, message: error instanceof Error ? error.message : String(error), diagnostics: [] };
+    self.postMessage(reply);
+    current = null;
+    return;
+  }
+  run.outbox.send(run.runId, run.simulation.finished, performance.now() - started);
+  run.busy = false;
+  // Let waiting messages (an input, a new target, a stop) in before the next piece.
+  if (behind(run)) setTimeout(pump, 0);
+}
+
+self.onmessage = (event: MessageEvent<RunRequest>) => {
+  const request = event.data;
+  if (request.kind === 'start') {
+    const { model, diagnostics } = compile(request.document);
+    if (!model) {
+      const reply: RunReply = { kind: 'failed', runId: request.runId, message: 'The drawing has errors; see Checks.', diagnostics };
+      self.postMessage(reply);
+      current = null;
+      return;
+    }
+    const outbox = new Outbox();
+    const simulation = startSimulation(model, { untilS: request.untilS, intervalS: request.intervalS }, outbox);
+    current = { runId: request.runId, simulation, outbox, reached: 0, target: 0, untilS: request.untilS, busy: false };
+    const tubeFlows = tubeFlowColumns(request.document, model, outbox.names);
+    const reply: RunReply = { kind: 'started', runId: request.runId, names: outbox.names, intervalS: simulation.intervalS, tubeFlows };
     self.postMessage(reply);
     return;
   }
-  try {
-    const trace = simulate(model, request.inputs, { untilS: request.untilS, intervalS: request.intervalS });
-    const columns = trace.signals.map((s) => Float64Array.from(s.values));
-    const time = Float64Array.from(trace.time);
-    const reply: SimulateReply = {
-      kind: 'trace',
-      requestId: request.requestId,
-      intervalS: trace.intervalS,
-      time,
-      names: trace.signals.map((s) => s.name),
-      columns,
-      events: trace.events,
-      computeMs: performance.now() - started,
-    };
-    self.postMessage(reply, [time.buffer, ...columns.map((c) => c.buffer)]);
-  } catch (error) {
-    const reply: SimulateReply = { kind: 'failed', requestId: request.requestId, message: error instanceof Error ? error.message : String(error), diagnostics };
+  if (!current || current.runId !== request.runId) return;
+  if (request.kind === 'stop') current = null;
+  else if (request.kind === 'advance') {
+    current.target = Math.max(current.target, request.toS);
+    pump();
+  } else {
+    const input = current.simulation.addInput(request.input);
+    const reply: RunReply = { kind: 'input-applied', runId: current.runId, input };
     self.postMessage(reply);
+    pump();
   }
 };

@@ -15,6 +15,7 @@ const trace: RunTrace = {
   time: Float64Array.from([0, 0.01]),
   names: ['v:p:4', 'c:x', 'c:v', 'v:q:1-4', 'v:position'],
   columns: [Float64Array.from([101_325, 701_325]), Float64Array.from([0, 0.025]), Float64Array.from([0, 0.5]), Float64Array.from([0, 1e-3]), Float64Array.from([1, 0])],
+  highestPa: 701_325,
 };
 
 describe('run plots and export', () => {
@@ -33,5 +34,12 @@ describe('run plots and export', () => {
 
   it('exports every signal in SI units, one row per output time', () => {
     expect(runCsv(trace)).toBe('time_s,v:p:4,c:x,c:v,v:q:1-4,v:position\n0,101325,0,0,0,1\n0.01,701325,0.025,0.5,0.001,0\n');
+  });
+
+  it('writes single-precision values to the digits they hold, not the float noise', () => {
+    const stored = { ...trace, columns: trace.columns.map((c) => Float32Array.from(c)) };
+    // 0.025 in single precision reads back as 0.02500000037252903.
+    expect(stored.columns[1]![1]).not.toBe(0.025);
+    expect(runCsv(stored)).toBe(runCsv(trace));
   });
 });

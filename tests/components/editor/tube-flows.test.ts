@@ -1,0 +1,49 @@
+import { describe, expect, it } from 'vitest';
+import { tubeFlowColumns } from '@/components/editor/run/tube-flows';
+import { compile } from '@/engine/solver/compile';
+import { simulate } from '@/engine/solver/simulate';
+import { signal } from '@/engine/trace/trace';
+import { TestCircuit } from '../../engine/support/circuit';
+
+// A hand-worked 5/2 valve driving a double-acting cylinder; the first tube runs from the valve's port 4 to the cylinder's A.
+const document = new TestCircuit()
+  .add('src', 'air-supply', { pressure: 600_000 })
+  .add('v', 'valve-5-2', {})
+  .add('c', 'cylinder-double-acting', { bore: 0.032, rod: 0.012, stroke: 0.1 })
+  .tube('v:4', 'c:A')
+  .tube('v:2', 'c:B')
+  .tube('src:2', 'v:1')
+  .build();
+const tubeToA = document.tubes[0]!.id;
+
+describe('the flow shown on a tube', () => {
+  const { model } = compile(document);
+  const trace = simulate(model!, [{ t: 0.1, component: 'v', action: 'press' }, { t: 1, component: 'v', action: 'release' }], { untilS: 2, intervalS: 0.005 });
+  const names = trace.signals.map((s) => s.name);
+  const columns = tubeFlowColumns(document, model!, names);
+
+  it("sums the passages of the part at the tube's first end that open onto that port", () => {
+    const picked = columns[tubeToA]!.map(([c, sign]) => [names[c], sign]);
+    // Port 4 of a 5/2 valve is fed from 1 in one position and exhausts to 5 in the other: two passages, both its own.
+    expect(picked).toHaveLength(2);
+    for (const [name] of picked) expect(name).toMatch(/^v:q:/);
+    expect(picked.map(([, sign]) => sign).sort()).toEqual([-1, 1]);
+  });
+
+  it('is positive while air goes out into the tube (extending) and negative while it comes back (retracting)', () => {
+    const flowAt = (t: number) => {
+      const k = Math.round(t / trace.intervalS);
+      return columns[tubeToA]!.reduce((sum, [c, sign]) => sum + sign * trace.signals[c]!.values[k]!, 0);
+    };
+    const x = signal(trace, 'c:x')!.values;
+    const moving = (t: number) => {
+      const k = Math.round(t / trace.intervalS);
+      return x[k + 1]! - x[k - 1]!;
+    };
+    // Pick moments when the piston is on its way out and on its way back.
+    const out = trace.time.find((t) => t > 0.1 && moving(t) > 1e-5)!;
+    const back = trace.time.find((t) => t > 1 && moving(t) < -1e-5)!;
+    expect(flowAt(out)).toBeGreaterThan(0);
+    expect(flowAt(back)).toBeLessThan(0);
+  });
+});
