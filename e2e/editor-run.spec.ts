@@ -48,6 +48,21 @@ test('a run of the largest demo circuit plays on the drawing; frames per second 
   // Start: S1 latches K1, the solenoid drives the press down.
   await editor.hold(editor.component('S1'), 300);
   await expect.poll(() => editor.extension('1A1'), { timeout: 20_000 }).toBeGreaterThan(0.5);
+  // The latched relay keeps current in its wires: some are drawn live, others dead, with the key to both.
+  await expect.poll(() => page.locator('.react-flow__edge.airproof-wire-live').count()).toBeGreaterThan(0);
+  expect(await page.locator('.react-flow__edge.airproof-wire-dead').count()).toBeGreaterThan(0);
+  await expect(page.getByTestId('wire-legend')).toBeVisible();
+  // Pointing at a tube reads out its pressure and the air going into it.
+  const onTube = await page.locator('.react-flow__edge.airproof-tube path.react-flow__edge-interaction').first().evaluate((path: SVGPathElement) => {
+    const mid = path.getPointAtLength(path.getTotalLength() / 2);
+    const screen = new DOMPoint(mid.x, mid.y).matrixTransform(path.getScreenCTM()!);
+    return { x: screen.x, y: screen.y };
+  });
+  await page.mouse.move(onTube.x, onTube.y);
+  await expect(page.locator('.react-flow__edge-textwrapper, .react-flow__edge-text').first()).toContainText(/bar \(gauge\) · \d+\.\d l\/min \(ANR\)/);
+  // A port says its pressure in its tooltip.
+  await expect(editor.port('1A1', 'A')).toHaveAttribute('title', /^1A1 port A \(cap end\): -?\d+\.\d\d bar \(gauge\)$/);
+  await page.screenshot({ path: 'test-results/screens/editor-relay-run-1440.png' });
 
   const measured = await page.evaluate(
     () =>

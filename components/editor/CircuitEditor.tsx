@@ -149,9 +149,12 @@ function EditorFrame({
       if (bar === undefined) return e;
       const styled = { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 } };
       if (e.id !== hovered) return styled;
-      // The tube under the pointer says its pressure, and the air going into it at its first end.
+      // The tube under the pointer says its pressure, and how much air flows along it and which way.
       const flow = frame.tubeFlow.get(e.id);
-      return { ...styled, ...readOut(`${bar.toFixed(2)} bar (gauge)${flow === undefined ? '' : ` · ${flow.toFixed(1)} l/min (ANR)`}`) };
+      const tube = document.tubes.find((t) => t.id === e.id);
+      const towards = tube && flow !== undefined ? document.components.find((c) => c.id === (flow >= 0 ? tube.to : tube.from).component)?.tag : undefined;
+      const along = flow === undefined ? '' : ` · ${Math.abs(flow).toFixed(1)} l/min (ANR)${towards && Math.abs(flow) >= 0.05 ? ` → ${towards}` : ''}`;
+      return { ...styled, ...readOut(`${bar.toFixed(2)} bar (gauge)${along}`) };
     });
   }, [document, frame, hovered, problems, running, selection, topBar]);
 
@@ -480,7 +483,6 @@ function EditorFrame({
           </ReactFlow>
           </EdgeEditingContext.Provider>
           </RunContext.Provider>
-          {frame ? <PressureLegend topBar={topBar} wires={document.wires.length > 0} /> : null}
           {document.components.length === 0 ? (
             <div className="pointer-events-none absolute inset-0 flex items-center justify-center p-6 text-center text-sm text-ink-soft">
               {canEdit ? 'Empty drawing: pick a part from the list, or drag it here.' : 'This revision has no components yet.'}
@@ -495,6 +497,7 @@ function EditorFrame({
           <Inspector document={document} selection={selection} readOnly={!editable} onEdit={store.getState().edit} />
         </aside>
       </div>
+      {frame ? <PressureLegend topBar={topBar} wires={document.wires.length > 0} /> : null}
       {running && run.trace && plotOpen ? <TracePlot trace={run.trace} document={document} t={run.t} /> : null}
       <ChecksPanel checks={checks} onPick={pickCheck} />
       <footer className="flex flex-wrap items-center justify-between gap-2 border-t border-rule px-3 py-1.5 text-xs text-ink-soft">

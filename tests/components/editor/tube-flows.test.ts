@@ -14,6 +14,7 @@ const document = new TestCircuit()
   .tube('v:2', 'c:B')
   .tube('src:2', 'v:1')
   .build();
+const supplyTube = document.tubes[2]!.id;
 const tubeToA = document.tubes[0]!.id;
 
 describe('the flow shown on a tube', () => {
@@ -45,5 +46,16 @@ describe('the flow shown on a tube', () => {
     const back = trace.time.find((t) => t > 1 && moving(t) < -1e-5)!;
     expect(flowAt(out)).toBeGreaterThan(0);
     expect(flowAt(back)).toBeLessThan(0);
+  });
+
+  it("takes the part at the second end, counted the other way, when the first end's part has no passage onto it", () => {
+    // An ideal supply holds its port without a passage: the valve's passages at its port 1 stand in.
+    const picked = columns[supplyTube]!.map(([c, sign]) => [names[c], sign]);
+    expect(picked.length).toBeGreaterThan(0);
+    for (const [name] of picked) expect(name).toMatch(/^v:q:/);
+    // Air goes from the supply into the valve while the piston is on its way out: positive, from the first end to the second.
+    const x = signal(trace, 'c:x')!.values;
+    const out = x.findIndex((v, k) => k > 0 && v > 0.02 && v < 0.08);
+    expect(columns[supplyTube]!.reduce((sum, [c, sign]) => sum + sign * trace.signals[c]!.values[out]!, 0)).toBeGreaterThan(0);
   });
 });
