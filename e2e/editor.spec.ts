@@ -75,6 +75,15 @@ test('an engineer draws a circuit, undoes and redoes, saves a revision and finds
   await page.getByTestId('redo').click();
   await editor.component('1A1').click();
   await expect(stroke).toHaveValue('50');
+  // A label shows on the drawing; notes take several lines and are kept with the part.
+  await page.getByTestId('inspector-label').fill('Lid clamp');
+  await page.getByTestId('inspector-label').press('Enter');
+  await expect(editor.component('1A1').getByTestId('canvas-label')).toHaveText('Lid clamp');
+  await page.getByTestId('inspector-notes').fill('Stroke cut to 50 mm for the shallow lids.\nCheck the cushion after a seal change.');
+  await page.getByTestId('inspector-field-stroke').focus();
+  await editor.component('1V1').click();
+  await editor.component('1A1').click();
+  await expect(page.getByTestId('inspector-notes')).toHaveValue('Stroke cut to 50 mm for the shallow lids.\nCheck the cushion after a seal change.');
 
   await page.screenshot({ path: 'test-results/screens/editor-1440.png' });
   await editor.saveRevision('Supply, 5/2 valve and cylinder');

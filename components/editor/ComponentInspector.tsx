@@ -3,13 +3,13 @@
 import { useMemo } from 'react';
 import { componentTypeById } from '@/engine/components/registry';
 import type { CircuitComponent, CircuitDocument } from '@/engine/document/schema';
-import { parameterEditLabel, setLabel, setParameter, setTag, type DocumentEdit } from './inspector-commands';
-import { InspectorField, inspectorInputClassName, inspectorValueClassName } from './InspectorField';
+import { parameterEditLabel, setLabel, setNotes, setParameter, setTag, type DocumentEdit } from './inspector-commands';
+import { InspectorField, inspectorAreaClassName, inspectorInputClassName, inspectorValueClassName } from './InspectorField';
 import { componentFormSchema, componentFormValues, effectiveParameters, tagChoices } from './parameter-form-schema';
 import { ParameterField } from './ParameterField';
 import { useCommittingForm } from './use-committing-form';
 
-/** One component: what it is, its tag and label, and a field for each parameter of its type. */
+/** One component: what it is, its tag, label and notes, and a field for each parameter of its type. */
 export function ComponentInspector({
   document,
   component,
@@ -64,6 +64,21 @@ export function ComponentInspector({
               })}
               className={inspectorInputClassName}
               data-testid="inspector-label"
+            />
+          )}
+        </InspectorField>
+        <InspectorField name="notes" label="Notes" hint="Optional: why a setting is what it is, what to check on site. Saved with the drawing." error={form.errorOf('notes')}>
+          {(control) => (
+            <textarea
+              {...control}
+              rows={3}
+              {...form.areaField('notes', {
+                schema: schema.shape.notes,
+                current: component.notes ?? '',
+                apply: (next) => onEdit(`Set ${tag} notes`, (draft) => setNotes(draft, id, next)),
+              })}
+              className={inspectorAreaClassName}
+              data-testid="inspector-notes"
             />
           )}
         </InspectorField>

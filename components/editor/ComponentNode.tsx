@@ -44,8 +44,14 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
       data-component-id={component.id}
       data-tag={component.tag}
       data-problem={problem}
-      title={`${component.tag} · ${type?.label ?? component.type}`}
+      title={[component.tag, component.label, type?.label ?? component.type].filter(Boolean).join(' · ')}
     >
+      {component.label ? (
+        // Above the box and upright whatever the turn, next to where the tag is usually drawn.
+        <span className="pointer-events-none absolute bottom-full left-0 mb-0.5 whitespace-nowrap text-[10px] italic leading-none text-ink-soft" data-testid="canvas-label">
+          {component.label}
+        </span>
+      ) : null}
       <div
         className="absolute top-0 left-0"
         style={{ width: geometry.width, height: geometry.height, transform: placementTransform(geometry, component), transformOrigin: '0 0' }}

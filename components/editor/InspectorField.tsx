@@ -8,9 +8,11 @@ export interface InspectorControlProps {
 }
 
 // The editor's compact controls (as in the palette and the save form), red while their field has a message.
-export const inspectorInputClassName =
-  'h-8 w-full min-w-0 rounded-md border border-rule bg-paper-raised px-2 text-sm text-ink placeholder:text-ink-faint ' +
+const inspectorBoxClassName =
+  'w-full min-w-0 rounded-md border border-rule bg-paper-raised px-2 text-sm text-ink placeholder:text-ink-faint ' +
   'disabled:cursor-not-allowed disabled:bg-paper-sunk aria-invalid:border-danger aria-invalid:bg-danger-soft/40';
+export const inspectorInputClassName = `h-8 ${inspectorBoxClassName}`;
+export const inspectorAreaClassName = `min-h-16 py-1 ${inspectorBoxClassName}`;
 
 /** For numbers and tags, which read as data and share the mono face (see `.value` in globals.css). */
 export const inspectorValueClassName = `${inspectorInputClassName} font-mono tabular-nums`;

@@ -36,6 +36,7 @@ export const AMBIENT_TEMPERATURE_LIMITS: ValueLimits = { minSi: 223.15, maxSi: 3
 
 export const TAG_MAX = componentSchema.shape.tag.maxLength!;
 export const LABEL_MAX = componentSchema.shape.label.unwrap().maxLength!;
+export const NOTES_MAX = componentSchema.shape.notes.unwrap().maxLength!;
 
 function rangeProblem(what: string, value: number, limits: ValueLimits): string | null {
   if (Number.isFinite(value) && value >= limits.minSi && value <= limits.maxSi) return null;
@@ -75,6 +76,16 @@ export function setLabel(draft: CircuitDocument, componentId: string, label: str
   if (wanted.length > LABEL_MAX) return refuse(`A label has at most ${LABEL_MAX} characters.`);
   if (wanted === '') delete component.label;
   else component.label = wanted;
+  return OK;
+}
+
+export function setNotes(draft: CircuitDocument, componentId: string, notes: string): CommandResult {
+  const component = draft.components.find((c) => c.id === componentId);
+  if (!component) return COMPONENT_GONE;
+  const wanted = notes.trim();
+  if (wanted.length > NOTES_MAX) return refuse(`Notes have at most ${NOTES_MAX} characters.`);
+  if (wanted === '') delete component.notes;
+  else component.notes = wanted;
   return OK;
 }
 

@@ -6,6 +6,7 @@ import {
   AMBIENT_PRESSURE_LIMITS,
   AMBIENT_TEMPERATURE_LIMITS,
   LABEL_MAX,
+  NOTES_MAX,
   TAG_MAX,
   tagProblem,
   TUBE_BORE_LIMITS,
@@ -26,6 +27,7 @@ export type ParameterValue = number | string | boolean;
 export interface ComponentFormValues {
   tag: string;
   label: string;
+  notes: string;
   parameters: Record<string, FieldValue>;
 }
 
@@ -101,12 +103,14 @@ function tagFieldSchema(document: CircuitDocument, componentId: string): z.ZodTy
 }
 
 const labelFieldSchema: z.ZodType<string, string> = z.string().trim().max(LABEL_MAX, `A label has at most ${LABEL_MAX} characters.`);
+const notesFieldSchema: z.ZodType<string, string> = z.string().trim().max(NOTES_MAX, `Notes have at most ${NOTES_MAX} characters.`);
 
 export function componentFormSchema(document: CircuitDocument, componentId: string, type: ComponentType | undefined) {
   const parameters = Object.entries(type?.parameters ?? {}).map(([name, spec]) => [name, parameterFieldSchema(spec)] as const);
   return z.object({
     tag: tagFieldSchema(document, componentId),
     label: labelFieldSchema,
+    notes: notesFieldSchema,
     parameters: z.object(Object.fromEntries(parameters)),
   });
 }
@@ -130,7 +134,7 @@ export function parameterFieldValue(spec: ParameterSpec, value: ParameterValue):
 export function componentFormValues(component: CircuitComponent, type: ComponentType | undefined): ComponentFormValues {
   const values = type ? effectiveParameters(component, type) : {};
   const parameters = Object.entries(type?.parameters ?? {}).map(([name, spec]) => [name, parameterFieldValue(spec, values[name]!)] as const);
-  return { tag: component.tag, label: component.label ?? '', parameters: Object.fromEntries(parameters) };
+  return { tag: component.tag, label: component.label ?? '', notes: component.notes ?? '', parameters: Object.fromEntries(parameters) };
 }
 
 const shown = (si: number, unit: DisplayUnit) => formatDisplay(unit.toDisplay(si), unit.significantDigits);

@@ -56,6 +56,15 @@ export function useCommittingForm<V extends FieldValues>(schema: z.ZodType<unkno
         },
       };
     },
+    /** Props for a text area: written on blur (Enter starts a new line); Escape puts back the document's value. */
+    areaField<T>(path: Path<V>, target: CommitTarget<T>) {
+      return {
+        ...form.register(path, { onBlur: () => commit(path, target) }),
+        onKeyDown(event: KeyboardEvent<HTMLTextAreaElement>) {
+          if (event.key === 'Escape') form.resetField(path);
+        },
+      };
+    },
     /** Props for a list or a tick box: written as soon as it changes. */
     choiceField<T>(path: Path<V>, target: CommitTarget<T>) {
       return form.register(path, { onChange: () => commit(path, target) });

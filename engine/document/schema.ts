@@ -24,6 +24,8 @@ export const componentSchema = z.object({
   /** Designation as the trade writes it: 1A1, 1V1, 1S1, 1M1, K1, S1. */
   tag: z.string().min(1).max(16),
   label: z.string().max(120).optional(),
+  /** Free text for whoever reads the drawing: why a setting is what it is, what to check on site. */
+  notes: z.string().max(2000).optional(),
   /** Parameters in SI units, keyed by the type's parameter names. */
   parameters: z.record(z.string(), parameterValue).default({}),
   position,

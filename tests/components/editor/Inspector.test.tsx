@@ -45,7 +45,7 @@ describe('Inspector', () => {
     const type = componentTypeById('valve-5-2')!;
     expect(markup).toContain(type.label);
     expect(markup).toContain(type.description);
-    expect(testIds(markup)).toEqual(['inspector', 'inspector-tag', 'inspector-label', ...Object.keys(type.parameters).map((name) => `inspector-field-${name}`)]);
+    expect(testIds(markup)).toEqual(['inspector', 'inspector-tag', 'inspector-label', 'inspector-notes', ...Object.keys(type.parameters).map((name) => `inspector-field-${name}`)]);
     expect(markup).toContain('Pilot switching pressure<span class="sr-only">, bar (gauge)</span>');
     expect(markup).toContain('l/(s·bar)');
     expect(markup).toMatch(/<select[^>]*data-testid="inspector-field-actuation"[^>]*>.*<option value="lever-detent">lever detent<\/option>/);

@@ -1,7 +1,7 @@
 import { produce, produceWithPatches, enablePatches } from 'immer';
 import { describe, expect, it } from 'vitest';
 import { addComponent, connect } from '@/components/editor/document-commands';
-import { parameterEditLabel, setLabel, setParameter, setSettings, setTag, setTube, tagProblem, type CommandResult } from '@/components/editor/inspector-commands';
+import { parameterEditLabel, setLabel, setNotes, setParameter, setSettings, setTag, setTube, tagProblem, type CommandResult } from '@/components/editor/inspector-commands';
 import { componentTypeById } from '@/engine/components/registry';
 import { circuitDocumentSchema, emptyDocument, type CircuitDocument } from '@/engine/document/schema';
 
@@ -127,6 +127,24 @@ describe('setLabel', () => {
   it('refuses a label longer than the document allows', () => {
     const { result, changed } = run(doc, (d) => setLabel(d, cylinder, 'x'.repeat(121)));
     expect(refused(result)).toMatch(/at most 120 characters/);
+    expect(changed).toBe(false);
+  });
+});
+
+describe('setNotes', () => {
+  const { doc, cylinder } = circuit();
+
+  it('keeps notes over several lines, trimmed, and removes them when emptied', () => {
+    const noted = run(doc, (d) => setNotes(d, cylinder, '  Cushion set for the 4 kg lid.\nCheck after a seal change.  ')).next;
+    expect(noted.components.find((c) => c.id === cylinder)!.notes).toBe('Cushion set for the 4 kg lid.\nCheck after a seal change.');
+    expect(circuitDocumentSchema.safeParse(noted).success).toBe(true);
+    const cleared = run(noted, (d) => setNotes(d, cylinder, '  ')).next;
+    expect('notes' in cleared.components.find((c) => c.id === cylinder)!).toBe(false);
+  });
+
+  it('refuses notes longer than the document allows', () => {
+    const { result, changed } = run(doc, (d) => setNotes(d, cylinder, 'x'.repeat(2001)));
+    expect(refused(result)).toMatch(/at most 2000 characters/);
     expect(changed).toBe(false);
   });
 });

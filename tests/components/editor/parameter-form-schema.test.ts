@@ -107,6 +107,7 @@ describe('the component form', () => {
     expect(componentFormValues(valve, valveType)).toEqual({
       tag: '1V1',
       label: '',
+      notes: '',
       parameters: {
         actuation: 'pushbutton',
         returnBy: 'spring',
@@ -150,10 +151,10 @@ describe('the component form', () => {
     expect(result.error!.issues.map((i) => i.path.join('.')).sort()).toEqual(['parameters.criticalRatio', 'parameters.pilotThreshold']);
   });
 
-  it('still edits tag and label of a component of an unknown type', () => {
+  it('still edits tag, label and notes of a component of an unknown type', () => {
     const stranger = { ...valve, type: 'no-such-type' };
-    expect(componentFormValues(stranger, undefined)).toEqual({ tag: '1V1', label: '', parameters: {} });
-    expect(componentFormSchema(doc, stranger.id, undefined).parse({ tag: 'X1', label: 'old part', parameters: {} })).toEqual({ tag: 'X1', label: 'old part', parameters: {} });
+    expect(componentFormValues(stranger, undefined)).toEqual({ tag: '1V1', label: '', notes: '', parameters: {} });
+    expect(componentFormSchema(doc, stranger.id, undefined).parse({ tag: 'X1', label: 'old part', notes: ' kept from the old line ', parameters: {} })).toEqual({ tag: 'X1', label: 'old part', notes: 'kept from the old line', parameters: {} });
   });
 });
 
