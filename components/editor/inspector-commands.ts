@@ -64,7 +64,16 @@ export function setTag(draft: CircuitDocument, componentId: string, tag: string)
   const wanted = tag.trim();
   const problem = tagProblem(draft, componentId, wanted);
   if (problem) return refuse(problem);
+  const previous = component.tag;
   component.tag = wanted;
+  // Contacts name their coil and coils their valve by tag: they follow the rename rather than lose their part.
+  for (const other of draft.components) {
+    const type = componentTypeById(other.type);
+    for (const [name, spec] of Object.entries(type?.parameters ?? {})) {
+      if (spec.kind !== 'tag') continue;
+      if ((other.parameters[name] ?? spec.default) === previous) other.parameters[name] = wanted;
+    }
+  }
   return OK;
 }
 

@@ -60,6 +60,11 @@ export const QUANTITY_UNITS: Readonly<Record<Quantity, DisplayUnit>> = {
   time: asIs('s'),
   mass: asIs('kg'),
   force: asIs('N'),
+  torque: asIs('N·m'),
+  // Catalogues give spring rates per millimetre of compression.
+  stiffness: unitOf('N/mm', (nPerM) => nPerM / 1000, (nPerMm) => nPerMm * 1000),
+  inertia: asIs('kg·m²'),
+  'volume-per-angle': timesInteger('cm³/rad', 1_000_000),
   damping: asIs('N·s/m'),
   // ISO 6358 data sheets: 1 dm³/(s·bar) = 1e-3 m³ / (s · 1e5 Pa) = 1e-8 m³/(s·Pa).
   conductance: timesInteger('l/(s·bar)', 100_000_000),
@@ -82,18 +87,10 @@ export const DEGREES_CELSIUS = unitOf('°C', (k) => k - ZERO_CELSIUS_K, (c) => c
 /** Volume parameters that may reach a cubic metre or more are vessels, shown in litres. */
 const LITRES_FROM_MAX_M3 = 1;
 
-/**
- * Units that a few parameters name in their label because no quantity fits them yet (a torque
- * borrows `force`, a moment of inertia `mass`, a spring rate `damping`): shown as stored, in SI.
- */
-const SI_UNITS_NAMED_IN_LABELS = new Set(['N·m', 'kg·m²', 'N/m', 'm³/rad']);
-
 type NumberSpec = Extract<ParameterSpec, { kind: 'number' }>;
 
 /** The unit a number parameter is shown in. */
-export function displayUnitFor(spec: Pick<NumberSpec, 'quantity' | 'max' | 'label'>): DisplayUnit {
-  const named = /\(([^()]+)\)\s*$/.exec(spec.label)?.[1];
-  if (named && SI_UNITS_NAMED_IN_LABELS.has(named)) return asIs(named);
+export function displayUnitFor(spec: Pick<NumberSpec, 'quantity' | 'max'>): DisplayUnit {
   if (spec.quantity === 'volume' && spec.max >= LITRES_FROM_MAX_M3) return LITRES;
   return QUANTITY_UNITS[spec.quantity];
 }

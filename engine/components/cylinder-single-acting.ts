@@ -15,7 +15,7 @@ export const cylinderSingleActing: ComponentType = {
     bore: withDefault(cylinderParameters.bore!, 0.025),
     stroke: withDefault(cylinderParameters.stroke!, 0.05),
     springPreload: { kind: 'number', quantity: 'force', label: 'Spring force, retracted', default: 20, min: 0, max: 10_000 },
-    springRate: { kind: 'number', quantity: 'damping', label: 'Spring rate (N/m)', default: 400, min: 0, max: 1_000_000 },
+    springRate: { kind: 'number', quantity: 'stiffness', label: 'Spring rate', default: 400, min: 0, max: 1_000_000 },
   },
   states: ['retracted', 'moving', 'extended'],
   build(ctx) {

@@ -17,6 +17,10 @@ export type Quantity =
   | 'time' // s
   | 'mass' // kg
   | 'force' // N
+  | 'torque' // N·m
+  | 'stiffness' // N/m
+  | 'inertia' // kg·m²
+  | 'volume-per-angle' // m³/rad
   | 'damping' // N·s/m
   | 'conductance' // m³/(s·Pa), ISO 6358 sonic conductance C
   | 'ratio' // dimensionless (critical ratio b, polytropic exponent)

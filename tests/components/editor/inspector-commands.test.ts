@@ -107,6 +107,20 @@ describe('setTag', () => {
     expect(run(doc, (d) => setTag(d, coil, 'k1')).next.components.find((c) => c.id === coil)!.tag).toBe('k1');
   });
 
+  it("carries a rename to the parts that name it: a relay's contacts follow their coil, a solenoid follows its valve", () => {
+    const { doc: withSolenoid, contact } = circuit();
+    const solenoidDoc = produce(withSolenoid, (d) => void addComponent(d, 'solenoid-coil', { x: 0, y: 0 }));
+    const solenoid = solenoidDoc.components.at(-1)!.id;
+    // Both rely on their defaults (K1, 1V1), which name the coil and the valve placed first.
+    expect(solenoidDoc.components.find((c) => c.id === contact)!.parameters.coil).toBeUndefined();
+    const renamed = run(run(solenoidDoc, (d) => setTag(d, coil, 'K7')).next, (d) => setTag(d, valve, '2V1')).next;
+    expect(renamed.components.find((c) => c.id === contact)!.parameters.coil).toBe('K7');
+    expect(renamed.components.find((c) => c.id === solenoid)!.parameters.valve).toBe('2V1');
+    // A part that named something else keeps its reference.
+    const elsewhere = run(produce(solenoidDoc, (d) => void (d.components.find((c) => c.id === contact)!.parameters.coil = 'K9')), (d) => setTag(d, coil, 'K7')).next;
+    expect(elsewhere.components.find((c) => c.id === contact)!.parameters.coil).toBe('K9');
+  });
+
   it('refuses an empty or overlong tag', () => {
     expect(refused(run(doc, (d) => setTag(d, valve, '   ')).result)).toBe('Enter a tag.');
     expect(refused(run(doc, (d) => setTag(d, valve, 'X'.repeat(17))).result)).toBe('A tag has at most 16 characters.');
