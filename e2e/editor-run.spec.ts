@@ -61,7 +61,7 @@ test('a run of the largest demo circuit plays on the drawing; frames per second 
   await page.mouse.move(onTube.x, onTube.y);
   await expect(page.locator('.react-flow__edge-textwrapper, .react-flow__edge-text').first()).toContainText(/bar \(gauge\) · \d+\.\d l\/min \(ANR\)/);
   // A port says its pressure in its tooltip.
-  await expect(editor.port('1A1', 'A')).toHaveAttribute('title', /^1A1 port A \(cap end\): -?\d+\.\d\d bar \(gauge\)$/);
+  await expect(editor.port('1A1', 'A')).toHaveAttribute('title', /^1A1 port A \(cap end\): -?\d+\.\d\d bar \(gauge\) · \d+\.\d l\/min \(ANR\) (in|out)$/);
   await page.screenshot({ path: 'test-results/screens/editor-relay-run-1440.png' });
 
   const measured = await page.evaluate(

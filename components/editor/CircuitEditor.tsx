@@ -129,7 +129,7 @@ function EditorFrame({
   const editable = canEdit && !running;
   // The signal names stay the same through a run, so the columns each part reads are worked out once.
   const signalNames = run.trace?.names;
-  const prepared = useMemo(() => (signalNames ? prepareRun(signalNames, document, run.tubeFlows) : null), [document, run.tubeFlows, signalNames]);
+  const prepared = useMemo(() => (signalNames ? prepareRun(signalNames, document, run.flows) : null), [document, run.flows, signalNames]);
   const frame = useMemo(() => (running && prepared && run.trace ? frameAt(prepared, run.trace, run.t) : null), [prepared, run.t, run.trace, running]);
   const topBar = rampTopBar(frame?.highestBar ?? 0);
   const nodes = useMemo(() => nodesOf(document, selection, problems), [document, selection, problems]);
@@ -165,6 +165,7 @@ function EditorFrame({
       running,
       states: frame?.components ?? new Map(),
       portBar: frame?.portBar ?? new Map(),
+      portFlow: frame?.portFlow ?? new Map(),
       actuate: (componentId, phase, keep = false) => {
         const component = document.components.find((c) => c.id === componentId);
         const operation = component ? handOperationOf(component) : null;

@@ -70,10 +70,12 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
         const anchor = placed.ports[port.id];
         if (!anchor) return null;
         const bar = run.running ? run.portBar.get(`${component.id}:${port.id}`) : undefined;
+        const flow = run.running ? run.portFlow.get(`${component.id}:${port.id}`) : undefined;
+        const through = flow === undefined ? '' : ` · ${Math.abs(flow).toFixed(1)} l/min (ANR) ${flow >= 0 ? 'out' : 'in'}`;
         return (
           <Handle
             key={port.id}
-            title={bar === undefined ? undefined : `${component.tag} port ${port.label ?? port.id}: ${bar.toFixed(2)} bar (gauge)`}
+            title={bar === undefined ? undefined : `${component.tag} port ${port.label ?? port.id}: ${bar.toFixed(2)} bar (gauge)${through}`}
             data-bar={bar?.toFixed(3)}
             id={port.id}
             type="source"

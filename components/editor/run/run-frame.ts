@@ -2,7 +2,7 @@ import { componentTypeById } from '@/engine/components/registry';
 import { parameterDefaults } from '@/engine/components/types';
 import { RHO_0_KG_PER_M3 } from '@/engine/calc/constants';
 import type { CircuitDocument } from '@/engine/document/schema';
-import type { SignedColumn } from './tube-flows';
+import type { FlowColumns, SignedColumn } from './flow-columns';
 
 /** A run as the page holds it: one column per signal, rows every `intervalS`. */
 export interface RunTrace {
@@ -32,6 +32,8 @@ export interface RunFrame {
   tubeFlow: Map<string, number>;
   /** Gauge pressure at every port the run reports, keyed `component:port`, bar. */
   portBar: Map<string, number>;
+  /** Air leaving the part at each port with passages onto it, l/min of free air; negative when it goes in. Keyed `component:port`. */
+  portFlow: Map<string, number>;
   /** Wires at + potential. */
   liveWires: Set<string>;
   highestBar: number;
@@ -59,14 +61,14 @@ interface PartReading {
 export interface PreparedRun {
   parts: PartReading[];
   tubes: Array<{ id: string; column: number; flows: readonly SignedColumn[] }>;
-  ports: Array<{ key: string; column: number }>;
+  ports: Array<{ key: string; column: number; flows: readonly SignedColumn[] }>;
   wires: Array<{ id: string; column: number }>;
   ambientPa: number;
   /** The highest supply set pressure, bar gauge: the pressure ramp reaches at least this far. */
   supplyBar: number;
 }
 
-export function prepareRun(names: readonly string[], document: CircuitDocument, tubeFlows: Readonly<Record<string, readonly SignedColumn[]>> = {}): PreparedRun {
+export function prepareRun(names: readonly string[], document: CircuitDocument, flows: FlowColumns = { ports: {}, tubes: {} }): PreparedRun {
   const index = new Map(names.map((name, i) => [name, i]));
   const column = (name: string) => index.get(name) ?? -1;
   const ambientPa = document.settings.ambientPressurePa;
@@ -84,11 +86,12 @@ export function prepareRun(names: readonly string[], document: CircuitDocument, 
     };
   });
   const tubes = document.tubes
-    .map((t) => ({ id: t.id, column: column(`${t.from.component}:p:${t.from.port}`), flows: tubeFlows[t.id] ?? [] }))
+    .map((t) => ({ id: t.id, column: column(`${t.from.component}:p:${t.from.port}`), flows: flows.tubes[t.id] ?? [] }))
     .filter((t) => t.column >= 0);
   const ports = names.flatMap((name, i) => {
     const [component, kind, port] = name.split(':');
-    return kind === 'p' && port !== undefined ? [{ key: `${component}:${port}`, column: i }] : [];
+    const key = `${component}:${port}`;
+    return kind === 'p' && port !== undefined ? [{ key, column: i, flows: flows.ports[key] ?? [] }] : [];
   });
   const wires = document.wires.map((w) => ({ id: w.id, column: column(`${w.id}:live`) })).filter((w) => w.column >= 0);
   // The ramp's scale starts from the supplies' set pressure, so colours keep their meaning as the run
@@ -108,24 +111,32 @@ export function frameAt(run: PreparedRun, trace: RunTrace, t: number): RunFrame 
     if (shown) components.set(part.id, shown);
   }
   const tubeBar = new Map<string, number>();
+  /** Free-air flow summed over signed columns at row k, l/min; undefined with no columns. */
+  const flowOf = (columns: readonly SignedColumn[]): number | undefined => {
+    if (columns.length === 0 || k < 0) return undefined;
+    let kgPerS = 0;
+    for (const [c, sign] of columns) kgPerS += sign * trace.columns[c]![k]!;
+    return kgPerS * KG_PER_S_TO_ANR_L_PER_MIN;
+  };
   const tubeFlow = new Map<string, number>();
   for (const tube of run.tubes) {
     const p = read(tube.column);
     if (p !== undefined) tubeBar.set(tube.id, (p - run.ambientPa) / 1e5);
-    if (tube.flows.length === 0 || k < 0) continue;
-    let kgPerS = 0;
-    for (const [c, sign] of tube.flows) kgPerS += sign * trace.columns[c]![k]!;
-    tubeFlow.set(tube.id, kgPerS * KG_PER_S_TO_ANR_L_PER_MIN);
+    const q = flowOf(tube.flows);
+    if (q !== undefined) tubeFlow.set(tube.id, q);
   }
   const portBar = new Map<string, number>();
+  const portFlow = new Map<string, number>();
   for (const port of run.ports) {
     const p = read(port.column);
     if (p !== undefined) portBar.set(port.key, (p - run.ambientPa) / 1e5);
+    const q = flowOf(port.flows);
+    if (q !== undefined) portFlow.set(port.key, q);
   }
   const liveWires = new Set<string>();
   for (const wire of run.wires) if ((read(wire.column) ?? 0) > 0.5) liveWires.add(wire.id);
   const highestBar = Math.max(run.supplyBar, trace.highestPa > 0 ? (trace.highestPa - run.ambientPa) / 1e5 : 0);
-  return { t: k < 0 ? 0 : trace.time[k]!, components, tubeBar, tubeFlow, portBar, liveWires, highestBar };
+  return { t: k < 0 ? 0 : trace.time[k]!, components, tubeBar, tubeFlow, portBar, portFlow, liveWires, highestBar };
 }
 
 function partState(part: PartReading, read: (column: number) => number | undefined): ComponentRunState | null {

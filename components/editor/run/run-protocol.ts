@@ -2,7 +2,7 @@ import type { CircuitDocument } from '@/engine/document/schema';
 import type { Diagnostic } from '@/engine/solver/model';
 import type { InputEvent } from '@/engine/solver/simulate';
 import type { TraceEvent } from '@/engine/trace/trace';
-import type { SignedColumn } from './tube-flows';
+import type { FlowColumns } from './flow-columns';
 
 /** What the page asks of the run worker. One run at a time; messages of an older run are ignored. */
 export type RunRequest =
@@ -21,8 +21,8 @@ export type RunReply =
       runId: number;
       names: string[];
       intervalS: number;
-      /** For each tube, the flow columns that sum to the air entering it at its first end. */
-      tubeFlows: Record<string, SignedColumn[]>;
+      /** Which flow columns sum to the air through each port and along each tube. */
+      flows: FlowColumns;
     }
   | {
       kind: 'rows';

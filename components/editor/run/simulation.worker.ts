@@ -3,7 +3,7 @@ import { compile } from '@/engine/solver/compile';
 import { startSimulation, type SteppedSimulation } from '@/engine/solver/simulate';
 import type { SignalUnit, TraceEvent, TraceSink } from '@/engine/trace/trace';
 import type { RunReply, RunRequest } from './run-protocol';
-import { tubeFlowColumns } from './tube-flows';
+import { flowColumns } from './flow-columns';
 
 // The engine runs here, off the page's thread, so the drawing stays responsive while it works.
 declare const self: DedicatedWorkerGlobalScope;
@@ -89,8 +89,8 @@ self.onmessage = (event: MessageEvent<RunRequest>) => {
     const outbox = new Outbox();
     const simulation = startSimulation(model, { untilS: request.untilS, intervalS: request.intervalS }, outbox);
     current = { runId: request.runId, simulation, outbox, reached: 0, target: 0, untilS: request.untilS, busy: false };
-    const tubeFlows = tubeFlowColumns(request.document, model, outbox.names);
-    const reply: RunReply = { kind: 'started', runId: request.runId, names: outbox.names, intervalS: simulation.intervalS, tubeFlows };
+    const flows = flowColumns(request.document, model, outbox.names);
+    const reply: RunReply = { kind: 'started', runId: request.runId, names: outbox.names, intervalS: simulation.intervalS, flows };
     self.postMessage(reply);
     return;
   }

@@ -6,7 +6,7 @@ import type { InputEvent } from '@/engine/solver/simulate';
 import { LiveTrace } from './live-trace';
 import type { RunTrace } from './run-frame';
 import type { RunReply, RunRequest } from './run-protocol';
-import type { SignedColumn } from './tube-flows';
+import type { FlowColumns } from './flow-columns';
 
 /** The longest run, s of machine time: ten minutes, less for a drawing with very many signals (see runLimitS). */
 export const LONGEST_RUN_S = 600;
@@ -49,7 +49,7 @@ export function useLiveRun() {
   /** The playback has caught up with the engine and waits for it. */
   const [waiting, setWaiting] = useState(false);
   const [limitS, setLimitS] = useState(LONGEST_RUN_S);
-  const [tubeFlows, setTubeFlows] = useState<Record<string, readonly SignedColumn[]>>({});
+  const [flows, setFlows] = useState<FlowColumns>({ ports: {}, tubes: {} });
   const worker = useRef<Worker | null>(null);
   const runId = useRef(0);
   const live = useRef<LiveTrace | null>(null);
@@ -79,7 +79,7 @@ export function useLiveRun() {
       }
       if (reply.kind === 'started') {
         live.current = new LiveTrace(reply.names, reply.intervalS);
-        setTubeFlows(reply.tubeFlows);
+        setFlows(reply.flows);
         c.limit = runLimitS(reply.names.length);
         setLimitS(c.limit);
         askAhead();
@@ -217,5 +217,5 @@ export function useLiveRun() {
 
   useEffect(() => () => worker.current?.terminate(), []);
 
-  return { status, trace, t, speed, message, pace, waiting, limitS, tubeFlows, applied, start, pause, resume, reset, act, step, changeSpeed };
+  return { status, trace, t, speed, message, pace, waiting, limitS, flows, applied, start, pause, resume, reset, act, step, changeSpeed };
 }

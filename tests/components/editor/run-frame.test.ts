@@ -71,13 +71,17 @@ describe('read-outs on the drawing during a run', () => {
     names: [...trace.names, `${valve}:q:1-4`, `${valve}:q:4-5`, 'w1:live'],
     columns: [...trace.columns, Float64Array.from([0, 2.37e-3, 0]), Float64Array.from([0, 0, 1.185e-3]), Float64Array.from([0, 1, 0])],
   };
-  const flows = { t1: [[5, 1], [6, -1]] as Array<readonly [number, 1 | -1]> };
+  const passages = [[5, 1], [6, -1]] as Array<readonly [number, 1 | -1]>;
+  const flows = { tubes: { t1: passages }, ports: { [`${valve}:4`]: passages } };
   const at = (t: number) => frameAt(prepareRun(withFlows.names, wired, flows), withFlows, t);
 
-  it('gives the air going into a tube in l/min of free air, signed by direction (ISO 8778: 1.185 kg/m³)', () => {
+  it('gives the air along a tube and through a port in l/min of free air, signed by direction (ISO 8778: 1.185 kg/m³)', () => {
     // 2.37e-3 kg/s ÷ 1.185 kg/m³ = 2.0e-3 m³/s = 120 l/min.
     expect(at(0.01).tubeFlow.get('t1')).toBeCloseTo(120, 9);
     expect(at(0.02).tubeFlow.get('t1')).toBeCloseTo(-60, 9);
+    expect(at(0.01).portFlow.get(`${valve}:4`)).toBeCloseTo(120, 9);
+    // A port whose part has no passage onto it has no flow of its own to show.
+    expect(at(0.01).portFlow.has(`${valve}:1`)).toBe(false);
   });
 
   it('gives every reported port its gauge pressure, and marks the wires that are live', () => {

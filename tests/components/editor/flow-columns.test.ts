@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { tubeFlowColumns } from '@/components/editor/run/tube-flows';
+import { flowColumns } from '@/components/editor/run/flow-columns';
 import { compile } from '@/engine/solver/compile';
 import { simulate } from '@/engine/solver/simulate';
 import { signal } from '@/engine/trace/trace';
@@ -17,11 +17,11 @@ const document = new TestCircuit()
 const supplyTube = document.tubes[2]!.id;
 const tubeToA = document.tubes[0]!.id;
 
-describe('the flow shown on a tube', () => {
+describe('the flow shown on a tube or a port', () => {
   const { model } = compile(document);
   const trace = simulate(model!, [{ t: 0.1, component: 'v', action: 'press' }, { t: 1, component: 'v', action: 'release' }], { untilS: 2, intervalS: 0.005 });
   const names = trace.signals.map((s) => s.name);
-  const columns = tubeFlowColumns(document, model!, names);
+  const { tubes: columns, ports } = flowColumns(document, model!, names);
 
   it("sums the passages of the part at the tube's first end that open onto that port", () => {
     const picked = columns[tubeToA]!.map(([c, sign]) => [names[c], sign]);
@@ -57,5 +57,17 @@ describe('the flow shown on a tube', () => {
     const x = signal(trace, 'c:x')!.values;
     const out = x.findIndex((v, k) => k > 0 && v > 0.02 && v < 0.08);
     expect(columns[supplyTube]!.reduce((sum, [c, sign]) => sum + sign * trace.signals[c]!.values[out]!, 0)).toBeGreaterThan(0);
+  });
+
+  it("gives each port the flow out of its own part: the valve's port 4 and the cylinder's port A see the same air, one leaving, one arriving", () => {
+    const sum = (key: string, k: number) => ports[key]!.reduce((total, [c, sign]) => total + sign * trace.signals[c]!.values[k]!, 0);
+    const x = signal(trace, 'c:x')!.values;
+    const k = x.findIndex((v, i) => i > 0 && v > 0.02 && v < 0.08);
+    expect(sum('v:4', k)).toBeGreaterThan(0);
+    expect(sum('c:A', k)).toBeLessThan(0);
+    // The tube holds little air, so what the valve sends is nearly what the cylinder takes (within 10 %).
+    expect(Math.abs(sum('v:4', k) + sum('c:A', k))).toBeLessThan(0.1 * sum('v:4', k));
+    // The ideal supply holds its port without a passage: no flow of its own to show.
+    expect(ports['src:2']).toBeUndefined();
   });
 });
