@@ -10,6 +10,10 @@ const envSchema = z.object({
   SMTP_URL: z.string().default('smtp://127.0.0.1:2525'),
   MAILBOX_URL: z.string().optional(),
   MAIL_FROM: z.string().default('Airproof <no-reply@airproof.local>'),
+  /** An S3-compatible endpoint (the local fake); unset means AWS itself. Credentials come from the AWS_* variables. */
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_BUCKET: z.string().min(1).default('airproof'),
+  S3_REGION: z.string().min(1).default('us-east-1'),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

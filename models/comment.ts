@@ -18,6 +18,8 @@ export class Comment extends Model<InferAttributes<Comment>, InferCreationAttrib
   declare body: string;
   declare resolvedAt: Date | null;
   declare resolvedById: string | null;
+  /** When the author last changed the body; null while it is as first written. */
+  declare editedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -33,6 +35,7 @@ export class Comment extends Model<InferAttributes<Comment>, InferCreationAttrib
         body: { type: DataTypes.TEXT, allowNull: false },
         resolvedAt: { type: DataTypes.DATE, allowNull: true },
         resolvedById: { type: DataTypes.UUID, allowNull: true },
+        editedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -6,6 +6,8 @@ import { Comment } from './comment';
 import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { PasswordResetToken } from './password-reset-token';
+import { ReviewRequest } from './review-request';
+import { ReviewRequestReviewer } from './review-request-reviewer';
 import { Run } from './run';
 import { Upload } from './upload';
 import { User } from './user';
@@ -13,6 +15,8 @@ import { Workspace } from './workspace';
 
 export { AuditEvent, Circuit, CircuitRevision, Comment, Invitation, Membership, PasswordResetToken, Run, Upload, User, Workspace };
 export { ROLES, type Role } from './roles';
+export { ReviewRequest, ReviewRequestReviewer };
+export { REVIEW_STATES, type ReviewState } from './review-request';
 
 let initialised: Sequelize | undefined;
 
@@ -20,7 +24,7 @@ let initialised: Sequelize | undefined;
 export function initModels(sequelize: Sequelize): void {
   if (initialised === sequelize) return;
   initialised = sequelize;
-  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken]) {
+  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer]) {
     model.initModel(sequelize);
   }
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
@@ -36,8 +40,16 @@ export function initModels(sequelize: Sequelize): void {
   CircuitRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
   Comment.belongsTo(Circuit, { foreignKey: 'circuitId', as: 'circuit' });
   Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Comment.belongsTo(User, { foreignKey: 'resolvedById', as: 'resolvedBy' });
+  Comment.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
   Run.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
+  Run.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
   Upload.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
   Invitation.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
   Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
+  ReviewRequest.belongsTo(Circuit, { foreignKey: 'circuitId', as: 'circuit' });
+  ReviewRequest.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
+  ReviewRequest.belongsTo(User, { foreignKey: 'requestedById', as: 'requestedBy' });
+  ReviewRequest.belongsTo(User, { foreignKey: 'decidedById', as: 'decidedBy' });
+  ReviewRequestReviewer.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
 }

@@ -8,6 +8,8 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare id: CreationOptional<string>;
   declare revisionId: string;
   declare kind: (typeof RUN_KINDS)[number];
+  /** What the person who saved it called it; null when they gave no name. */
+  declare name: string | null;
   declare status: (typeof RUN_STATUSES)[number];
   declare inputs: unknown;
   declare summary: unknown;
@@ -23,6 +25,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         revisionId: { type: DataTypes.UUID, allowNull: false },
         kind: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...RUN_KINDS]] } },
+        name: { type: DataTypes.TEXT, allowNull: true },
         status: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...RUN_STATUSES]] } },
         inputs: { type: DataTypes.JSONB, allowNull: false },
         summary: { type: DataTypes.JSONB, allowNull: true },

@@ -82,6 +82,8 @@ export interface SteppedSimulation {
   earliestInputTime(): number;
   /** Takes an input at its time, or at the earliest time still open if that is later; returns it as applied. */
   addInput(input: InputEvent): InputEvent;
+  /** The step statistics so far, in an otherwise empty trace: the rows and events went to the sink. */
+  finish(): Trace;
 }
 
 /**

@@ -19,6 +19,8 @@ export const PERMISSIONS = {
   'comment:create': ['owner', 'engineer', 'reviewer', 'technician'],
   'review:request': ['owner', 'engineer'],
   'review:decide': ['owner', 'reviewer'],
+  /** Decide or withdraw any review request of the workspace, named on it or not. */
+  'review:manage': ['owner'],
   'upload:create': ['owner', 'engineer', 'technician'],
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -3,6 +3,7 @@ import type { CircuitDocument } from '@/engine/document/schema';
 import { recordAudit } from '@/lib/audit';
 import { getSequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { markReviewsStale } from '@/lib/reviews/mark-reviews-stale';
 import { Circuit, CircuitRevision } from '@/models';
 
 /**
@@ -17,6 +18,7 @@ export async function appendRevision({
   document,
   message,
   expectedLockVersion,
+  restoredFrom,
 }: {
   workspaceId: string;
   circuitId: string;
@@ -24,6 +26,8 @@ export async function appendRevision({
   document: CircuitDocument;
   message: string;
   expectedLockVersion: number;
+  /** Number of the revision whose document this one brings back, for the audit trail. */
+  restoredFrom?: number;
 }): Promise<{ id: string; number: number; lockVersion: number }> {
   return getSequelize().transaction(async (transaction) => {
     const circuit = await Circuit.findOne({ where: { id: circuitId, workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
@@ -34,7 +38,8 @@ export async function appendRevision({
     const number = circuit.currentRevisionNumber + 1;
     const revision = await CircuitRevision.create({ circuitId, number, document, authorId, message }, { transaction });
     await circuit.update({ currentRevisionId: revision.id, currentRevisionNumber: number, lockVersion: circuit.lockVersion + 1 }, { transaction });
-    await recordAudit({ action: 'circuit.revised', actorId: authorId, workspaceId, targetType: 'circuit', targetId: circuitId, data: { number } }, transaction);
+    await markReviewsStale({ circuitId, transaction });
+    await recordAudit({ action: 'circuit.revised', actorId: authorId, workspaceId, targetType: 'circuit', targetId: circuitId, data: { number, restoredFrom } }, transaction);
     return { id: revision.id, number, lockVersion: circuit.lockVersion };
   });
 }

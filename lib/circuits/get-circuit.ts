@@ -1,6 +1,7 @@
 import 'server-only';
 import { getSequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { findCircuitApproval, type CircuitApproval } from '@/lib/reviews/circuit-approval';
 import { Circuit, CircuitRevision, User } from '@/models';
 
 export interface CircuitDetail {
@@ -10,9 +11,10 @@ export interface CircuitDetail {
   lockVersion: number;
   updatedAt: string;
   revision: { id: string; number: number; message: string; createdAt: string; author: { id: string; name: string } | null; document: unknown } | null;
+  approval: CircuitApproval | null;
 }
 
-/** A circuit of the given workspace with its newest revision; `not_found:circuit` otherwise. */
+/** A circuit of the given workspace with its newest revision and the approval that still holds; `not_found:circuit` otherwise. */
 export async function getCircuit({ workspaceId, circuitId }: { workspaceId: string; circuitId: string }): Promise<CircuitDetail> {
   getSequelize();
   const circuit = (await Circuit.findOne({
@@ -39,5 +41,6 @@ export async function getCircuit({ workspaceId, circuitId }: { workspaceId: stri
           document: revision.document,
         }
       : null,
+    approval: await findCircuitApproval({ circuitId }),
   };
 }

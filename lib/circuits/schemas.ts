@@ -31,3 +31,24 @@ export const appendRevisionBodySchema = z
     expectedLockVersion: z.number().int().min(0),
   })
   .strict();
+
+export const revisionNumberSchema = z.coerce.number().int('not a revision number').min(1, 'not a revision number').max(1_000_000, 'not a revision number');
+
+export const listRevisionsQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+});
+export type ListRevisionsQuery = z.infer<typeof listRevisionsQuerySchema>;
+
+export const restoreRevisionBodySchema = z
+  .object({
+    expectedLockVersion: z.number().int().min(0),
+    message: z.string().trim().min(1, 'say why, or leave the message out').max(500, 'at most 500 characters').optional(),
+  })
+  .strict();
+
+/** Both ends are optional: `to` defaults to the newest revision, `from` to the one before `to`. */
+export const compareQuerySchema = z.object({
+  from: revisionNumberSchema.optional(),
+  to: revisionNumberSchema.optional(),
+});

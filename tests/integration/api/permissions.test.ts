@@ -7,6 +7,13 @@ import * as passwordResetConfirm from '@/app/api/account/password-reset/confirm/
 import * as passwordResetRequest from '@/app/api/account/password-reset/request/route';
 import * as signUp from '@/app/api/account/sign-up/route';
 import * as circuitRevisions from '@/app/api/circuits/[id]/revisions/route';
+import * as revisionOne from '@/app/api/circuits/[id]/revisions/[number]/route';
+import * as revisionRestore from '@/app/api/circuits/[id]/revisions/[number]/restore/route';
+import * as circuitCompare from '@/app/api/circuits/[id]/compare/route';
+import * as circuitReviews from '@/app/api/circuits/[id]/reviews/route';
+import * as reviews from '@/app/api/reviews/route';
+import * as reviewDecision from '@/app/api/reviews/[id]/decision/route';
+import * as reviewWithdraw from '@/app/api/reviews/[id]/withdraw/route';
 import * as circuitOne from '@/app/api/circuits/[id]/route';
 import * as circuits from '@/app/api/circuits/route';
 import * as health from '@/app/api/health/route';
@@ -20,9 +27,17 @@ import * as members from '@/app/api/workspaces/current/members/route';
 import * as current from '@/app/api/workspaces/current/route';
 import * as workspaces from '@/app/api/workspaces/route';
 import * as switchWorkspace from '@/app/api/workspaces/switch/route';
+import * as circuitComments from '@/app/api/circuits/[id]/comments/route';
+import * as circuitRuns from '@/app/api/circuits/[id]/runs/route';
+import * as commentOne from '@/app/api/comments/[id]/route';
+import * as commentReopen from '@/app/api/comments/[id]/reopen/route';
+import * as commentResolve from '@/app/api/comments/[id]/resolve/route';
+import * as runOne from '@/app/api/runs/[id]/route';
+import * as runTrace from '@/app/api/runs/[id]/trace/route';
 import { newToken } from '@/lib/auth/tokens';
 import { createCircuit } from '@/lib/circuits/create-circuit';
-import { Circuit, Invitation, PasswordResetToken } from '@/models';
+import { saveRun } from '@/lib/runs/save-run';
+import { Circuit, Comment, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer } from '@/models';
 import { apiRequest, createTestWorkspace, type TestWorkspace } from '../fixtures';
 
 /**
@@ -41,6 +56,13 @@ interface World {
   invitationId: string;
   invitationToken: string;
   resetToken: string;
+  /** Asked by the engineer, of the reviewer and the owner. */
+  reviewId: string;
+  /** An open thread the owner wrote. */
+  commentId: string;
+  resolvedCommentId: string;
+  /** A saved run of revision 1. */
+  runId: string;
 }
 
 type Handler = (request: NextRequest, context: never) => Promise<Response>;
@@ -82,6 +104,26 @@ const TABLE: RouteCase[] = [
   { route: 'POST /api/account/password-reset/request', handler: passwordResetRequest.POST, path: () => '/api/account/password-reset/request', body: (w) => ({ email: w.ws.users.viewer.email }), expect: row(202, 202, 202, 202, 202, 202, 202) },
   { route: 'POST /api/account/password-reset/confirm', handler: passwordResetConfirm.POST, path: () => '/api/account/password-reset/confirm', body: (w) => ({ token: w.resetToken, password: 'cell-reset-pass-1' }), expect: row(200, 200, 200, 200, 200, 200, 200) },
   { route: 'GET /api/mailbox', handler: mailbox.GET, path: () => '/api/mailbox', expect: row(401, 403, 403, 403, 403, 200, 200) },
+  { route: 'GET /api/circuits/[id]/revisions', handler: circuitRevisions.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/revisions`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/revisions/[number]', handler: revisionOne.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/revisions/1`, params: (w) => ({ id: w.circuitId, number: '1' }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/revisions/[number]/restore', handler: revisionRestore.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/revisions/1/restore`, params: (w) => ({ id: w.circuitId, number: '1' }), body: (w) => ({ expectedLockVersion: w.circuitLockVersion }), expect: row(401, 403, 403, 403, 201, 404, 201) },
+  { route: 'GET /api/circuits/[id]/compare', handler: circuitCompare.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/compare?from=1&to=1`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/reviews', handler: circuitReviews.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/reviews`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/reviews', handler: circuitReviews.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/reviews`, params: (w) => ({ id: w.circuitId }), body: (w) => ({ revisionNumber: 1, reviewerIds: [w.ws.users.reviewer.id], message: 'Table cell' }), expect: row(401, 403, 403, 403, 201, 404, 201) },
+  { route: 'GET /api/reviews', handler: reviews.GET, path: () => '/api/reviews?box=waiting', expect: row(401, 200, 200, 200, 200, 200, 200) },
+  // Named reviewers and owners decide; the engineer asked, and asking is not deciding.
+  { route: 'POST /api/reviews/[id]/decision', handler: reviewDecision.POST as Handler, path: (w) => `/api/reviews/${w.reviewId}/decision`, params: (w) => ({ id: w.reviewId }), body: () => ({ decision: 'approve' }), expect: row(401, 403, 403, 200, 403, 404, 200) },
+  { route: 'POST /api/reviews/[id]/withdraw', handler: reviewWithdraw.POST as Handler, path: (w) => `/api/reviews/${w.reviewId}/withdraw`, params: (w) => ({ id: w.reviewId }), expect: row(401, 403, 403, 403, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/comments', handler: circuitComments.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/comments?revision=1`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/comments', handler: circuitComments.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/comments`, params: (w) => ({ id: w.circuitId }), body: () => ({ revisionNumber: 1, anchor: { kind: 'circuit' }, body: 'Table cell' }), expect: row(401, 403, 201, 201, 201, 404, 201) },
+  // Only its author edits a comment, and the owner wrote this one.
+  { route: 'PATCH /api/comments/[id]', handler: commentOne.PATCH as Handler, path: (w) => `/api/comments/${w.commentId}`, params: (w) => ({ id: w.commentId }), body: () => ({ body: 'Table cell, edited' }), expect: row(401, 403, 403, 403, 403, 404, 200) },
+  { route: 'POST /api/comments/[id]/resolve', handler: commentResolve.POST as Handler, path: (w) => `/api/comments/${w.commentId}/resolve`, params: (w) => ({ id: w.commentId }), expect: row(401, 403, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/comments/[id]/reopen', handler: commentReopen.POST as Handler, path: (w) => `/api/comments/${w.resolvedCommentId}/reopen`, params: (w) => ({ id: w.resolvedCommentId }), expect: row(401, 403, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/runs', handler: circuitRuns.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/runs`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/runs', handler: circuitRuns.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/runs`, params: (w) => ({ id: w.circuitId }), body: () => ({ revisionNumber: 1, inputs: [], untilS: 1 }), expect: row(401, 403, 201, 201, 201, 404, 201) },
+  { route: 'GET /api/runs/[id]', handler: runOne.GET as Handler, path: (w) => `/api/runs/${w.runId}`, params: (w) => ({ id: w.runId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/runs/[id]/trace', handler: runTrace.GET as Handler, path: (w) => `/api/runs/${w.runId}/trace`, params: (w) => ({ id: w.runId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
 ];
 
 /** Routes served by next-auth itself; they need Next's request scope, so e2e/auth-endpoints.spec.ts checks them. */
@@ -103,7 +145,17 @@ async function makeWorld(): Promise<World> {
   });
   const reset = newToken();
   await PasswordResetToken.create({ userId: ws.users.technician.id, tokenHash: reset.hash, expiresAt: new Date(Date.now() + 3_600_000) });
-  return { ws, other, circuitId: circuit.id, circuitLockVersion, invitationId: inv.id, invitationToken: invitation.token, resetToken: reset.token };
+  const review = await ReviewRequest.create({ circuitId: circuit.id, revisionId: circuit.revision.id, requestedById: ws.users.engineer.id, message: 'Check the clamp' });
+  await ReviewRequestReviewer.bulkCreate([ws.users.reviewer.id, ws.users.owner.id].map((reviewerId) => ({ reviewRequestId: review.id, reviewerId })));
+  const thread = { circuitId: circuit.id, revisionId: circuit.revision.id, parentId: null, anchor: { kind: 'circuit' as const }, editedAt: null };
+  const comment = await Comment.create({ ...thread, authorId: ws.users.owner.id, body: 'Is 6 bar right for the clamp?', resolvedAt: null, resolvedById: null });
+  const resolved = await Comment.create({ ...thread, authorId: ws.users.reviewer.id, body: 'Tube t2 looks long', resolvedAt: new Date(), resolvedById: ws.users.reviewer.id });
+  const run = await saveRun({
+    actor: { userId: ws.users.technician.id, workspaceId: ws.workspaceId, workspaceName: '', role: 'technician' },
+    circuitId: circuit.id,
+    input: { revisionNumber: 1, inputs: [], untilS: 1, name: null },
+  });
+  return { ws, other, circuitId: circuit.id, circuitLockVersion, invitationId: inv.id, invitationToken: invitation.token, resetToken: reset.token, reviewId: review.id, commentId: comment.id, resolvedCommentId: resolved.id, runId: run.id };
 }
 
 function userFor(kind: ActorKind, w: World): string | undefined {

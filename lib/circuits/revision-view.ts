@@ -1,0 +1,45 @@
+import 'server-only';
+import type { Transaction } from 'sequelize';
+import { AppError } from '@/lib/errors';
+import { personOf, type Person } from '@/lib/person';
+import { Circuit, CircuitRevision, User } from '@/models';
+
+export interface RevisionSummary {
+  id: string;
+  number: number;
+  message: string;
+  createdAt: string;
+  author: Person;
+}
+
+export interface RevisionDetail extends RevisionSummary {
+  document: unknown;
+}
+
+export type RevisionWithAuthor = CircuitRevision & { author: User };
+
+export function revisionSummary(revision: RevisionWithAuthor): RevisionSummary {
+  return { id: revision.id, number: revision.number, message: revision.message, createdAt: revision.createdAt.toISOString(), author: personOf(revision.author) };
+}
+
+export function revisionDetail(revision: RevisionWithAuthor): RevisionDetail {
+  return { ...revisionSummary(revision), document: revision.document };
+}
+
+/** The circuit of the workspace, or `not_found:circuit`: another workspace's circuit is never admitted to exist. */
+export async function findCircuit({ workspaceId, circuitId, transaction }: { workspaceId: string; circuitId: string; transaction?: Transaction }): Promise<Circuit> {
+  const circuit = await Circuit.findOne({ where: { id: circuitId, workspaceId }, transaction });
+  if (!circuit) throw new AppError('not_found', 'circuit', 'No such circuit in this workspace');
+  return circuit;
+}
+
+/** One revision of a circuit by number, with its author; `not_found:revision` otherwise. */
+export async function findRevision({ circuitId, number, field, transaction }: { circuitId: string; number: number; field?: string; transaction?: Transaction }): Promise<RevisionWithAuthor> {
+  const revision = (await CircuitRevision.findOne({
+    where: { circuitId, number },
+    include: [{ model: User, as: 'author', attributes: ['id', 'name'] }],
+    transaction,
+  })) as RevisionWithAuthor | null;
+  if (!revision) throw new AppError('not_found', 'revision', `This circuit has no revision ${number}`, field);
+  return revision;
+}

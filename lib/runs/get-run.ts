@@ -1,0 +1,67 @@
+import 'server-only';
+import type { InputEvent } from '@/engine/solver/simulate';
+import { getSequelize } from '@/lib/db';
+import { AppError } from '@/lib/errors';
+import { personOf, type Person } from '@/lib/person';
+import type { RunSummary } from '@/lib/runs/simulate-saved-run';
+import { getObject } from '@/lib/storage/object-store';
+import { Circuit, CircuitRevision, Run, User } from '@/models';
+
+export interface RunDetail {
+  id: string;
+  revisionNumber: number;
+  circuitId: string;
+  name: string | null;
+  untilS: number;
+  inputs: InputEvent[];
+  createdAt: string;
+  createdBy: Person;
+}
+
+type RunWithRevision = Run & { revision: CircuitRevision; createdBy: User };
+
+/** A run of a circuit in the workspace; `not_found:run` otherwise. */
+async function findRun({ workspaceId, runId }: { workspaceId: string; runId: string }): Promise<RunWithRevision> {
+  getSequelize();
+  const run = (await Run.findOne({
+    where: { id: runId },
+    include: [
+      {
+        model: CircuitRevision,
+        as: 'revision',
+        attributes: ['id', 'number', 'circuitId'],
+        // The workspace condition sits on the nested circuit; without this the run would be found through an outer join.
+        required: true,
+        include: [{ model: Circuit, as: 'circuit', attributes: [], where: { workspaceId } }],
+      },
+      { model: User, as: 'createdBy', attributes: ['id', 'name'] },
+    ],
+  })) as RunWithRevision | null;
+  if (!run) throw new AppError('not_found', 'run', 'No such run in this workspace');
+  return run;
+}
+
+export function runUntilS(run: Run): number {
+  return (run.summary as RunSummary).untilS;
+}
+
+export async function getRun({ workspaceId, runId }: { workspaceId: string; runId: string }): Promise<RunDetail> {
+  const run = await findRun({ workspaceId, runId });
+  return {
+    id: run.id,
+    revisionNumber: run.revision.number,
+    circuitId: run.revision.circuitId,
+    name: run.name,
+    untilS: runUntilS(run),
+    inputs: run.inputs as InputEvent[],
+    createdAt: run.createdAt.toISOString(),
+    createdBy: personOf(run.createdBy),
+  };
+}
+
+/** The run's trace as JSON bytes, streamed from object storage. */
+export async function openRunTrace({ workspaceId, runId }: { workspaceId: string; runId: string }): Promise<ReadableStream<Uint8Array>> {
+  const run = await findRun({ workspaceId, runId });
+  if (!run.traceKey) throw new AppError('not_found', 'trace', 'This run has no stored trace');
+  return (await getObject(run.traceKey)).pipeThrough(new DecompressionStream('gzip'));
+}
