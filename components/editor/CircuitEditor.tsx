@@ -16,11 +16,13 @@ import {
   type NodeChange,
   type NodeTypes,
 } from '@xyflow/react';
-import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent, type ReactNode } from 'react';
 import { useStore } from 'zustand';
 import type { CircuitDocument } from '@/engine/document/schema';
 import type { Diagnostic } from '@/engine/solver/model';
 import { GRID, symbolGeometry } from '@/components/symbols/geometry';
+import { saveRun } from '@/components/review/review-api';
+import { useCan } from '@/components/workspace/use-current-workspace';
 import { ChecksPanel } from './ChecksPanel';
 import { PressureLegend } from './run/PressureLegend';
 import { rampColour, rampTopBar } from './run/pressure-ramp';
@@ -69,7 +71,7 @@ export interface EditorCircuit {
  * controlled view of the document; every edit goes through the store, so undo covers it.
  * Without edit rights the same canvas is shown read-only.
  */
-export function CircuitEditor({ circuit, canEdit, onReloadLatest }: { circuit: EditorCircuit; canEdit: boolean; onReloadLatest: () => void }) {
+export function CircuitEditor({ circuit, canEdit, onReloadLatest, status }: { circuit: EditorCircuit; canEdit: boolean; onReloadLatest: () => void; status?: ReactNode }) {
   // A draft left by a reload of this same revision comes back (the editor mounts in the browser only, once the circuit has loaded).
   const [start] = useState(() => {
     const draft = canEdit && typeof window !== 'undefined' ? readDraft(window.localStorage, circuit.id, circuit.lockVersion) : null;
@@ -79,7 +81,7 @@ export function CircuitEditor({ circuit, canEdit, onReloadLatest }: { circuit: E
   });
   return (
     <ReactFlowProvider>
-      <EditorFrame store={start.store} restoredFrom={start.restoredAt} circuit={circuit} canEdit={canEdit} onReloadLatest={onReloadLatest} />
+      <EditorFrame store={start.store} restoredFrom={start.restoredAt} circuit={circuit} canEdit={canEdit} onReloadLatest={onReloadLatest} status={status} />
     </ReactFlowProvider>
   );
 }
@@ -90,7 +92,9 @@ function EditorFrame({
   circuit,
   canEdit,
   onReloadLatest,
+  status,
 }: {
+  status?: ReactNode;
   store: EditorStore;
   restoredFrom: string | null;
   circuit: EditorCircuit;
@@ -345,12 +349,28 @@ function EditorFrame({
   };
 
   const counted = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
+  const [runSaveNote, setRunSaveNote] = useState<string | null>(null);
+  const canSaveRun = useCan('circuit:run');
+  // A saved run belongs to a saved revision: with unsaved changes the drawing being run is not one yet.
+  const saveThisRun = () => {
+    if (changes > 0) {
+      setRunSaveNote('Save the revision first: a run is kept with a saved revision.');
+      return;
+    }
+    const untilS = Math.max(run.intervalS, Math.round(run.t / run.intervalS) * run.intervalS);
+    setRunSaveNote('Saving the run…');
+    saveRun(circuit.id, { revisionNumber: saved.number, inputs: run.applied.current, untilS })
+      .then(() => setRunSaveNote(`Run of ${untilS.toFixed(2)} s saved with revision ${saved.number}.`))
+      .catch((error: unknown) => setRunSaveNote(error instanceof Error ? error.message : 'The run could not be saved.'));
+  };
+
   const summary = [counted(document.components.length, 'component'), counted(document.tubes.length, 'tube'), counted(document.wires.length, 'wire')].join(' · ');
 
   return (
     <div className="flex h-[calc(100dvh-11rem)] min-h-[28rem] flex-col overflow-hidden rounded-lg border border-rule bg-paper-raised" data-testid="circuit-editor">
       <EditorToolbar
         title={circuit.title}
+        status={status}
         revisionNumber={saved.number}
         unsaved={changes > 0}
         canEdit={editable}
@@ -385,6 +405,7 @@ function EditorFrame({
         canRun={document.components.length > 0 && !checks.some((c) => c.severity === 'error')}
         onStart={() => {
           store.getState().select({ components: [], tubes: [], wires: [] });
+          setRunSaveNote(null);
           run.start(document);
         }}
         onPause={run.pause}
@@ -397,6 +418,8 @@ function EditorFrame({
         onStep={run.step}
         plotOpen={plotOpen}
         onTogglePlot={() => setPlotOpen((open) => !open)}
+        onSaveRun={canSaveRun ? saveThisRun : undefined}
+        saveNote={runSaveNote}
       />
       {restoredAt ? (
         <div className="flex flex-wrap items-center gap-2 border-b border-rule bg-caution-soft px-3 py-1.5 text-sm text-ink" role="status" data-testid="draft-restored">

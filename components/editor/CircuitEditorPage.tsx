@@ -9,6 +9,7 @@ import { useCan, useCurrentWorkspace } from '@/components/workspace/use-current-
 import { circuitDocumentSchema } from '@/engine/document/schema';
 // Types only: the shape comes from the server module, so client and route cannot drift apart.
 import type { CircuitDetail } from '@/lib/circuits/get-circuit';
+import { ApprovalNote } from '@/components/review/ApprovalNote';
 import { CircuitEditor } from './CircuitEditor';
 
 export const circuitKey = (id: string) => ['circuits', 'one', id] as const;
@@ -52,6 +53,14 @@ export function CircuitEditorPage({ circuitId }: { circuitId: string }) {
       key={detail.lockVersion}
       circuit={{ id: detail.id, title: detail.title, lockVersion: detail.lockVersion, revisionNumber: detail.revision?.number ?? 0, document: parsed.data }}
       canEdit={canEdit}
+      status={
+        <div className="flex flex-wrap items-center gap-x-3">
+          <ApprovalNote circuitId={circuitId} />
+          <TextLink href={`/circuits/${circuitId}/history`} className="text-xs" data-testid="history-link">
+            Revisions and reviews
+          </TextLink>
+        </div>
+      }
       onReloadLatest={() => void queryClient.invalidateQueries({ queryKey: circuitKey(circuitId) })}
     />
   );

@@ -6,15 +6,27 @@ import { symbolGeometry } from '@/components/symbols/geometry';
 import { placedGeometry, placementTransform } from '@/components/symbols/placement';
 import { SymbolFor } from '@/components/symbols/SymbolFor';
 import { componentTypeById } from '@/engine/components/registry';
-import type { ComponentFlowNode } from './flow-mapping';
+import type { ChangeMark, ComponentFlowNode } from './flow-mapping';
 import { RunContext } from './run/run-context';
 import { handOperationOf } from './run/hands';
+
+/** Our own key for a comparison: new parts solid teal, changed ones doubled amber, removed ones faded and dotted. */
+const MARK_OUTLINE: Record<ChangeMark, string> = {
+  added: 'rounded-sm outline-2 outline-offset-4 outline-accent',
+  changed: 'rounded-sm outline-4 outline-offset-4 outline-double outline-caution',
+  removed: 'rounded-sm opacity-40 grayscale outline-2 outline-offset-4 outline-dotted outline-ink-soft',
+};
+const MARK_BADGE: Record<ChangeMark, { text: string; className: string }> = {
+  added: { text: '+', className: 'bg-accent' },
+  changed: { text: 'Δ', className: 'bg-caution' },
+  removed: { text: '−', className: 'bg-ink-soft' },
+};
 
 const SIDE_TO_POSITION = { top: Position.Top, right: Position.Right, bottom: Position.Bottom, left: Position.Left } as const;
 
 /** A placed component on the canvas: its symbol turned and mirrored as placed, and one handle per port at its placed anchor. */
 export const ComponentNode = memo(function ComponentNode({ data, selected }: NodeProps<ComponentFlowNode>) {
-  const { component, problem } = data;
+  const { component, problem, mark, comments } = data;
   const type = componentTypeById(component.type);
   const geometry = symbolGeometry(component.type);
   const placed = placedGeometry(component.type, component);
@@ -38,7 +50,8 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
       data-workable={workable || undefined}
       data-extension={shown?.extension?.toFixed(3)}
       data-active-position={shown?.activePosition}
-      className={`relative text-ink ${workable ? 'cursor-pointer ' : ''}${selected ? 'rounded-sm outline-2 outline-offset-4 outline-accent' : problem ? `rounded-sm outline-2 outline-offset-4 outline-dashed ${problem === 'error' ? 'outline-danger' : 'outline-caution'}` : ''}`}
+      className={`relative text-ink ${workable ? 'cursor-pointer ' : ''}${selected ? 'rounded-sm outline-2 outline-offset-4 outline-accent' : problem ? `rounded-sm outline-2 outline-offset-4 outline-dashed ${problem === 'error' ? 'outline-danger' : 'outline-caution'}` : mark ? MARK_OUTLINE[mark] : ''}`}
+      data-mark={mark}
       style={{ width: placed.width, height: placed.height }}
       data-testid="canvas-component"
       data-component-id={component.id}
@@ -46,6 +59,19 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
       data-problem={problem}
       title={[component.tag, component.label, type?.label ?? component.type].filter(Boolean).join(' · ')}
     >
+      {mark ? (
+        <span className={`pointer-events-none absolute -right-2 -top-2 z-10 flex size-4 items-center justify-center rounded-full text-[10px] font-bold leading-none text-paper-raised ${MARK_BADGE[mark].className}`} aria-label={mark}>
+          {MARK_BADGE[mark].text}
+        </span>
+      ) : null}
+      {comments ? (
+        <span className="pointer-events-none absolute -bottom-2 -right-2 z-10 flex items-center gap-0.5 rounded-full border border-rule bg-paper-raised px-1 text-[10px] leading-4 text-ink" data-testid="comment-marker" aria-label={`${comments} comment thread${comments === 1 ? '' : 's'}`}>
+          <svg width="9" height="8" viewBox="0 0 9 8" aria-hidden="true">
+            <path d="M1 1h7v4.5H4L2 7V5.5H1z" fill="none" stroke="currentColor" strokeWidth="1" strokeLinejoin="round" />
+          </svg>
+          {comments}
+        </span>
+      ) : null}
       {component.label ? (
         // Above the box and upright whatever the turn, next to where the tag is usually drawn.
         <span className="pointer-events-none absolute bottom-full left-0 mb-0.5 whitespace-nowrap text-[10px] italic leading-none text-ink-soft" data-testid="canvas-label">

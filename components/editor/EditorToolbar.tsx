@@ -1,5 +1,6 @@
 'use client';
 
+import type { ReactNode } from 'react';
 import { Button } from '@/components/ui/Button';
 import type { Alignment, DistributionAxis } from './document-commands';
 
@@ -34,6 +35,8 @@ const SPREADS: ReadonlyArray<readonly [DistributionAxis, string]> = [
 
 interface EditorToolbarProps {
   title: string;
+  /** Under the revision number: where the circuit's review stands, and the way to its history. */
+  status?: ReactNode;
   revisionNumber: number;
   unsaved: boolean;
   canEdit: boolean;
@@ -72,6 +75,7 @@ export function EditorToolbar(props: EditorToolbarProps) {
           Revision <span className="value">{revisionNumber}</span>
           {unsaved ? <span className="ml-1 text-caution">· unsaved changes</span> : null}
         </p>
+        {props.status}
       </div>
       {canEdit ? (
         <>

@@ -5,7 +5,15 @@ import type { Severity } from './diagnostics';
 import type { ItemSelection, PortRef } from './document-commands';
 import type { Point } from './orthogonal-route';
 
-export type ComponentNodeData = { component: CircuitComponent; problem?: Severity };
+/** How a part changed between two revisions, when the drawing shows a comparison. */
+export type ChangeMark = 'added' | 'changed' | 'removed';
+export type ComponentNodeData = {
+  component: CircuitComponent;
+  problem?: Severity;
+  mark?: ChangeMark;
+  /** Comment threads pinned to the part, shown as a count beside it. */
+  comments?: number;
+};
 export type ComponentFlowNode = Node<ComponentNodeData, 'component'>;
 export type ConnectionEdgeData = {
   kind: 'tube' | 'wire';

@@ -10,6 +10,7 @@ export function ShellNav() {
 
   const links = [
     { href: '/circuits', label: 'Circuits' },
+    { href: '/reviews', label: 'Reviews' },
     { href: '/workspace/members', label: 'Members' },
     ...(canReadMailbox ? [{ href: '/mailbox', label: 'Mailbox' }] : []),
   ];

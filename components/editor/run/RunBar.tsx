@@ -22,6 +22,10 @@ interface RunBarProps {
   onStep: () => void;
   plotOpen: boolean;
   onTogglePlot: () => void;
+  /** Stores the run so far with the revision, for a reviewer to replay; absent when it cannot be saved. */
+  onSaveRun?: () => void;
+  /** Why the run cannot be saved now, or what saving it did. */
+  saveNote?: string | null;
   onSpeed: (speed: (typeof RUN_SPEEDS)[number]) => void;
 }
 
@@ -75,6 +79,16 @@ export function RunBar(props: RunBarProps) {
         <Button size="sm" variant="quiet" onClick={props.onTogglePlot} aria-expanded={props.plotOpen} data-testid="run-plot">
           {props.plotOpen ? 'Hide plot' : 'Plot'}
         </Button>
+      ) : null}
+      {active && props.onSaveRun ? (
+        <Button size="sm" variant="quiet" onClick={props.onSaveRun} disabled={status === 'starting' || status === 'failed'} title="Keep the inputs and the trace so far with this revision, for a reviewer to replay" data-testid="run-save">
+          Save this run
+        </Button>
+      ) : null}
+      {active && props.saveNote ? (
+        <span className="text-xs text-ink-soft" role="status" data-testid="run-save-note">
+          {props.saveNote}
+        </span>
       ) : null}
       <output className="value text-ink" data-testid="run-time" data-t={t.toFixed(3)} aria-live="off">
         t = {t.toFixed(2)} s <span className="text-ink-faint">of at most {props.limitS} s</span>

@@ -217,5 +217,5 @@ export function useLiveRun() {
 
   useEffect(() => () => worker.current?.terminate(), []);
 
-  return { status, trace, t, speed, message, pace, waiting, limitS, flows, applied, start, pause, resume, reset, act, step, changeSpeed };
+  return { status, trace, t, speed, message, pace, waiting, limitS, flows, applied, intervalS: OUTPUT_INTERVAL_S, start, pause, resume, reset, act, step, changeSpeed };
 }
