@@ -139,7 +139,8 @@ export function ComparePage({
         </p>
       ) : null}
       <div className="flex min-h-0 flex-1 flex-col gap-3 lg:flex-row">
-        <div className="flex min-h-[24rem] min-w-0 flex-1 flex-col overflow-hidden rounded-lg border border-rule bg-paper-raised">
+        {/* A set height on narrow screens: the drawing fills its box, and a box without a height has none to fill. */}
+        <div className="flex h-[26rem] min-w-0 flex-col overflow-hidden rounded-lg border border-rule bg-paper-raised lg:h-auto lg:flex-1">
           <div className="min-h-0 flex-1">
             {documents ? (
               <RevisionDrawing document={documents.after} removed={removed} marks={marks} comments={threadCounts} picked={anchor} onPick={pick} frame={frame} />

@@ -94,7 +94,7 @@ function Drawing({ document, removed, marks, comments, picked, onPick, frame }: 
   );
 
   return (
-    <div className="airproof-canvas relative h-full min-h-[22rem] w-full" data-testid="revision-drawing">
+    <div className="airproof-canvas relative h-full w-full" data-testid="revision-drawing">
       <RunContext.Provider value={run}>
         <ReactFlow<ComponentFlowNode, ConnectionFlowEdge>
           nodes={nodes}

@@ -131,9 +131,14 @@ export function RevisionHistory({ circuitId }: { circuitId: string }) {
                   )}
                 </td>
                 <td className="space-x-2 whitespace-nowrap px-3 py-2 text-right">
-                  <TextLink href={`/circuits/${circuitId}/compare?from=${Math.max(1, revision.number - 1)}&to=${revision.number}`}>
-                    {revision.number > 1 ? 'Changes' : 'View'}
+                  <TextLink href={`/circuits/${circuitId}/compare?from=${revision.number}&to=${revision.number}`} data-testid="revision-view">
+                    View
                   </TextLink>
+                  {revision.number > 1 ? (
+                    <TextLink href={`/circuits/${circuitId}/compare?from=${revision.number - 1}&to=${revision.number}`} data-testid="revision-changes">
+                      Changes
+                    </TextLink>
+                  ) : null}
                   {canEdit && circuit.data?.revision && revision.number !== circuit.data.revision.number ? (
                     <Button size="sm" variant="quiet" onClick={() => restore.mutate(revision.number)} disabled={restore.isPending} data-testid="revision-restore">
                       Restore
