@@ -170,4 +170,30 @@ test('a run saved in the editor replays on the review page, and a comment can be
   await page.getByTestId('comment-body').fill('Piston fully out here.');
   await page.getByTestId('comment-post').click();
   await expect(page.getByTestId('comment-thread-anchor')).toContainText('a saved run at t =');
+
+  // The author can edit the comment; anyone who comments can resolve the thread, which then folds away.
+  await page.getByTestId('comment-edit').click();
+  await page.getByRole('textbox', { name: 'Edit the comment' }).fill('Piston fully out and resting on its stop here.');
+  await page.getByRole('button', { name: 'Save', exact: true }).click();
+  await expect(page.getByTestId('comment-text')).toHaveText('Piston fully out and resting on its stop here.');
+  await expect(page.getByTestId('comment-entry')).toContainText('edited');
+  await page.getByTestId('comment-resolve').click();
+  await expect(page.locator('[data-testid="comment-thread"][data-resolved]')).toHaveCount(1);
+  await expect(page.getByText('Resolved (1)')).toBeVisible();
+
+  // A tube can carry a thread too: click it on the drawing.
+  // A point on some tube that no part covers.
+  const onTube = await page.evaluate(() => {
+    for (const path of document.querySelectorAll<SVGPathElement>('.react-flow__edge.airproof-tube path.react-flow__edge-interaction')) {
+      for (let share = 0.1; share < 0.95; share += 0.1) {
+        const at = path.getPointAtLength(path.getTotalLength() * share);
+        const screen = new DOMPoint(at.x, at.y).matrixTransform(path.getScreenCTM()!);
+        if (document.elementFromPoint(screen.x, screen.y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge')) return { x: screen.x, y: screen.y };
+      }
+    }
+    return null;
+  });
+  expect(onTube).not.toBeNull();
+  await page.mouse.click(onTube!.x, onTube!.y);
+  await expect(page.getByTestId('comment-anchor')).toContainText('the tube');
 });
