@@ -12,6 +12,19 @@ function compareLinkIn(mail: CaughtMail): string {
   return match[0];
 }
 
+/** A copy of the two-hand demo circuit, made through the API as an import would; returns its id. */
+async function copyOfTwoHandDemo(page: Page, title: string): Promise<string> {
+  const demoDocument: unknown = JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.json', 'utf8'));
+  const created = await page.evaluate(
+    async ({ title, document }) => {
+      const response = await fetch('/api/circuits', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ title, document }) });
+      return (await response.json()) as { id: string };
+    },
+    { title, document: demoDocument },
+  );
+  return created.id;
+}
+
 async function signIn(page: Page, role: 'engineer' | 'reviewer', path: string) {
   const signInPage = new SignInPage(page);
   await signInPage.open(path);
@@ -25,19 +38,11 @@ test('an engineer asks for a review, the reviewer asks for changes on the drawin
   const reviewerUser = demoUser('reviewer');
   const engineerUser = demoUser('engineer');
 
-  // The engineer starts from a copy of the two-hand demo circuit, made through the API as an import would.
+  // The engineer starts from a copy of the two-hand demo circuit.
   await signIn(engineer, 'engineer', '/circuits');
   await expect(engineer.getByTestId('circuit-table')).toBeVisible();
-  const document: unknown = JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.json', 'utf8'));
   const title = `Lid press for review ${Date.now()}`;
-  const created = await engineer.evaluate(
-    async ({ title, document }) => {
-      const response = await fetch('/api/circuits', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ title, document }) });
-      return (await response.json()) as { id: string };
-    },
-    { title, document },
-  );
-  const circuitId = created.id;
+  const circuitId = await copyOfTwoHandDemo(engineer, title);
   const editor = new EditorPage(engineer);
   await engineer.goto(`/circuits/${circuitId}`);
   await expect(editor.editor()).toBeVisible();
@@ -134,16 +139,9 @@ test('a run saved in the editor replays on the review page, and a comment can be
   test.setTimeout(120_000);
   await signIn(page, 'engineer', '/circuits');
   await expect(page.getByTestId('circuit-table')).toBeVisible();
-  const document: unknown = JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.json', 'utf8'));
-  const created = await page.evaluate(
-    async ({ title, document }) => {
-      const response = await fetch('/api/circuits', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ title, document }) });
-      return (await response.json()) as { id: string };
-    },
-    { title: `Lid press run to replay ${Date.now()}`, document },
-  );
+  const circuitId = await copyOfTwoHandDemo(page, `Lid press run to replay ${Date.now()}`);
   const editor = new EditorPage(page);
-  await page.goto(`/circuits/${created.id}`);
+  await page.goto(`/circuits/${circuitId}`);
   await page.getByTestId('run-start').click();
   await expect.poll(() => editor.runTime()).toBeGreaterThan(0.2);
   await editor.component('1S1').click({ modifiers: ['Shift'] });
@@ -153,7 +151,7 @@ test('a run saved in the editor replays on the review page, and a comment can be
   await expect(page.getByTestId('run-save-note')).toContainText('saved with revision 1');
 
   // The saved run plays back on the review page: at its end the piston is out, at its start it is in.
-  await page.goto(`/circuits/${created.id}/compare?from=1&to=1`);
+  await page.goto(`/circuits/${circuitId}/compare?from=1&to=1`);
   await page.getByTestId('compare-tab-runs').click();
   await page.getByTestId('saved-run-open').click();
   const slider = page.getByTestId('replay-slider');

@@ -17,6 +17,9 @@ const SHORTCUTS: ReadonlyArray<readonly [string, string]> = [
   ['Right or middle drag, wheel', 'Pan'],
   ['Ctrl+wheel, pinch', 'Zoom'],
   ['Drag port to port', 'Join with a tube or wire'],
+  ['Drag a square on a selected tube or wire', 'Move a run or a bend'],
+  ['Double-click a tube or wire, a bend', 'Add a bend, remove it'],
+  ['During a run: Shift+click a button', 'Keep it pressed'],
 ];
 
 const LINE_UPS: ReadonlyArray<readonly [Alignment, string]> = [

@@ -177,7 +177,7 @@ export function ComparePage({
                 <p className="text-sm text-ink-soft">Working out the changes…</p>
               )
             ) : null}
-            {tab === 'review' && to !== undefined ? <ReviewPanel circuitId={circuitId} revisionNumber={to} focusReviewId={reviewId} /> : null}
+            {tab === 'review' && to !== undefined ? <ReviewPanel circuitId={circuitId} revisionNumber={to} newest={to === latest} focusReviewId={reviewId} /> : null}
             {tab === 'comments' && documents && to !== undefined ? (
               <CommentsPanel focusId={commentId} circuitId={circuitId} revisionNumber={to} document={documents.after} anchor={anchor} onClearAnchor={() => setAnchor({ kind: 'circuit' })} onShow={show} />
             ) : null}

@@ -16,7 +16,18 @@ import { decideReview, fetchCircuitReviews, requestReview, reviewKeys, reviewSta
  * reviewers (with a message), a requested reviewer approves or asks for changes (with a note),
  * the one who asked may withdraw.
  */
-export function ReviewPanel({ circuitId, revisionNumber, focusReviewId }: { circuitId: string; revisionNumber: number; focusReviewId?: string }) {
+export function ReviewPanel({
+  circuitId,
+  revisionNumber,
+  newest,
+  focusReviewId,
+}: {
+  circuitId: string;
+  revisionNumber: number;
+  /** Only the newest revision can be put up for review: an older one would be outdated from the start. */
+  newest: boolean;
+  focusReviewId?: string;
+}) {
   const queryClient = useQueryClient();
   const me = useSession().data?.user?.id;
   const canRequest = useCan('review:request');
@@ -35,7 +46,8 @@ export function ReviewPanel({ circuitId, revisionNumber, focusReviewId }: { circ
     <div className="space-y-3" data-testid="review-panel">
       {reviews.isError ? <FormAlert tone="error">{reviews.error.message}</FormAlert> : null}
       {focused ? <ReviewCard review={focused} me={me} canDecide={canDecide} onChanged={refresh} /> : <p className="text-sm text-ink-soft">No one has been asked to review revision {revisionNumber} yet.</p>}
-      {canRequest && (!focused || focused.state !== 'requested' || focused.stale) ? <RequestForm circuitId={circuitId} revisionNumber={revisionNumber} onDone={refresh} /> : null}
+      {canRequest && newest && (!focused || focused.state !== 'requested' || focused.stale) ? <RequestForm circuitId={circuitId} revisionNumber={revisionNumber} onDone={refresh} /> : null}
+      {canRequest && !newest ? <p className="text-xs text-ink-soft">A review is asked for the newest revision; revision {revisionNumber} has been followed by others.</p> : null}
       {ofThisRevision.length > 1 ? (
         <details className="text-xs text-ink-soft">
           <summary>Earlier requests for this revision ({ofThisRevision.length - 1})</summary>
