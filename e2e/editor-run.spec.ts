@@ -53,11 +53,7 @@ test('a run of the largest demo circuit plays on the drawing; frames per second 
   expect(await page.locator('.react-flow__edge.airproof-wire-dead').count()).toBeGreaterThan(0);
   await expect(page.getByTestId('wire-legend')).toBeVisible();
   // Pointing at a tube reads out its pressure and the air going into it.
-  const onTube = await page.locator('.react-flow__edge.airproof-tube path.react-flow__edge-interaction').first().evaluate((path: SVGPathElement) => {
-    const mid = path.getPointAtLength(path.getTotalLength() / 2);
-    const screen = new DOMPoint(mid.x, mid.y).matrixTransform(path.getScreenCTM()!);
-    return { x: screen.x, y: screen.y };
-  });
+  const onTube = await editor.pointOnTube();
   await page.mouse.move(onTube.x, onTube.y);
   await expect(page.locator('.react-flow__edge-textwrapper, .react-flow__edge-text').first()).toContainText(/bar \(gauge\) · \d+\.\d l\/min \(ANR\)/);
   // A port says its pressure in its tooltip.

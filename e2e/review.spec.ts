@@ -180,18 +180,7 @@ test('a run saved in the editor replays on the review page, and a comment can be
   await expect(page.getByText('Resolved (1)')).toBeVisible();
 
   // A tube can carry a thread too: click it on the drawing.
-  // A point on some tube that no part covers.
-  const onTube = await page.evaluate(() => {
-    for (const path of document.querySelectorAll<SVGPathElement>('.react-flow__edge.airproof-tube path.react-flow__edge-interaction')) {
-      for (let share = 0.1; share < 0.95; share += 0.1) {
-        const at = path.getPointAtLength(path.getTotalLength() * share);
-        const screen = new DOMPoint(at.x, at.y).matrixTransform(path.getScreenCTM()!);
-        if (document.elementFromPoint(screen.x, screen.y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge')) return { x: screen.x, y: screen.y };
-      }
-    }
-    return null;
-  });
-  expect(onTube).not.toBeNull();
-  await page.mouse.click(onTube!.x, onTube!.y);
+  const onTube = await editor.pointOnTube();
+  await page.mouse.click(onTube.x, onTube.y);
   await expect(page.getByTestId('comment-anchor')).toContainText('the tube');
 });

@@ -2,6 +2,7 @@
 
 import { useState } from 'react';
 import type { Diagnostic } from '@/engine/solver/model';
+import { countOf } from '@/components/ui/count';
 
 /**
  * What the engine finds wrong or doubtful in the drawing, listed under the canvas. Picking a
@@ -11,7 +12,7 @@ export function ChecksPanel({ checks, onPick }: { checks: readonly Diagnostic[];
   const [open, setOpen] = useState(false);
   const errors = checks.filter((c) => c.severity === 'error').length;
   const warnings = checks.length - errors;
-  const summary = checks.length === 0 ? 'No findings' : [errors ? `${errors} error${errors === 1 ? '' : 's'}` : null, warnings ? `${warnings} warning${warnings === 1 ? '' : 's'}` : null].filter(Boolean).join(' · ');
+  const summary = checks.length === 0 ? 'No findings' : [errors ? countOf(errors, 'error') : null, warnings ? countOf(warnings, 'warning') : null].filter(Boolean).join(' · ');
 
   return (
     <section aria-label="Checks" className="border-t border-rule" data-testid="checks">

@@ -12,9 +12,7 @@ import {
   useReactFlow,
   type Connection,
   type EdgeChange,
-  type EdgeTypes,
   type NodeChange,
-  type NodeTypes,
 } from '@xyflow/react';
 import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent, type ReactNode } from 'react';
 import { useStore } from 'zustand';
@@ -25,15 +23,15 @@ import { saveRun } from '@/components/review/review-api';
 import { useCan } from '@/components/workspace/use-current-workspace';
 import { ChecksPanel } from './ChecksPanel';
 import { PressureLegend } from './run/PressureLegend';
-import { rampColour, rampTopBar } from './run/pressure-ramp';
+import { rampTopBar } from './run/pressure-ramp';
+import { edgeInRun } from './run/run-edges';
 import { RunBar } from './run/RunBar';
 import { RunContext, type RunView } from './run/run-context';
 import { TracePlot } from './run/TracePlot';
 import { Hands, handOperationOf } from './run/hands';
 import { frameAt, prepareRun } from './run/run-frame';
 import { useLiveRun } from './run/use-live-run';
-import { ComponentNode } from './ComponentNode';
-import { ConnectionEdge } from './ConnectionEdge';
+import { CANVAS_EDGE_TYPES, CANVAS_NODE_TYPES } from './canvas-types';
 import { memoizedChecks, problemsByItem } from './diagnostics';
 import {
   addComponent,
@@ -54,9 +52,8 @@ import { edgesOf, nodesOf, type ComponentFlowNode, type ConnectionFlowEdge } fro
 import { clearDraft, readDraft, writeDraft } from './local-draft';
 import { Palette, PALETTE_DRAG_TYPE } from './Palette';
 import { SaveRevisionForm, type SavedRevision } from './SaveRevisionForm';
+import { countOf } from '@/components/ui/count';
 
-const NODE_TYPES: NodeTypes = { component: ComponentNode };
-const EDGE_TYPES: EdgeTypes = { connection: ConnectionEdge };
 
 export interface EditorCircuit {
   id: string;
@@ -142,17 +139,11 @@ function EditorFrame({
     if (!frame) return drawn;
     const readOut = (label: string) => ({ label, labelBgPadding: [4, 2] as [number, number], labelBgBorderRadius: 3 });
     return drawn.map((e) => {
-      // A live wire is drawn heavier, solid and amber; a dead one thin and dashed (told apart without colour).
-      if (e.data?.kind === 'wire') {
-        const live = frame.liveWires.has(e.id);
-        const styled = { ...e, className: `${e.className ?? ''} ${live ? 'airproof-wire-live' : 'airproof-wire-dead'}`, data: { ...e.data, live } };
-        return e.id === hovered ? { ...styled, ...readOut(live ? 'live (+)' : 'no voltage') } : styled;
-      }
-      // During a run each tube takes the colour of its pressure.
-      const bar = frame.tubeBar.get(e.id);
-      if (bar === undefined) return e;
-      const styled = { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 } };
+      const styled = edgeInRun(e, frame, topBar);
       if (e.id !== hovered) return styled;
+      if (e.data?.kind === 'wire') return { ...styled, ...readOut(frame.liveWires.has(e.id) ? 'live (+)' : 'no voltage') };
+      const bar = frame.tubeBar.get(e.id);
+      if (bar === undefined) return styled;
       // The tube under the pointer says its pressure, and how much air flows along it and which way.
       const flow = frame.tubeFlow.get(e.id);
       const tube = document.tubes.find((t) => t.id === e.id);
@@ -348,7 +339,6 @@ function EditorFrame({
     setNotice(`Saved as revision ${revision.number}.`);
   };
 
-  const counted = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
   const [runSaveNote, setRunSaveNote] = useState<string | null>(null);
   const canSaveRun = useCan('circuit:run');
   // A saved run belongs to a saved revision: with unsaved changes the drawing being run is not one yet.
@@ -364,7 +354,7 @@ function EditorFrame({
       .catch((error: unknown) => setRunSaveNote(error instanceof Error ? error.message : 'The run could not be saved.'));
   };
 
-  const summary = [counted(document.components.length, 'component'), counted(document.tubes.length, 'tube'), counted(document.wires.length, 'wire')].join(' · ');
+  const summary = [countOf(document.components.length, 'component'), countOf(document.tubes.length, 'tube'), countOf(document.wires.length, 'wire')].join(' · ');
 
   return (
     <div className="flex h-[calc(100dvh-11rem)] min-h-[28rem] flex-col overflow-hidden rounded-lg border border-rule bg-paper-raised" data-testid="circuit-editor">
@@ -472,8 +462,8 @@ function EditorFrame({
           <ReactFlow<ComponentFlowNode, ConnectionFlowEdge>
             nodes={nodes}
             edges={edges}
-            nodeTypes={NODE_TYPES}
-            edgeTypes={EDGE_TYPES}
+            nodeTypes={CANVAS_NODE_TYPES}
+            edgeTypes={CANVAS_EDGE_TYPES}
             onNodesChange={onNodesChange}
             onEdgesChange={onEdgesChange}
             onNodeDragStop={() => store.getState().endDrag()}

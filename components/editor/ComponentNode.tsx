@@ -9,6 +9,7 @@ import { componentTypeById } from '@/engine/components/registry';
 import type { ChangeMark, ComponentFlowNode } from './flow-mapping';
 import { RunContext } from './run/run-context';
 import { handOperationOf } from './run/hands';
+import { countOf } from '@/components/ui/count';
 
 /** Our own key for a comparison: new parts solid teal, changed ones doubled amber, removed ones faded and dotted. */
 const MARK_OUTLINE: Record<ChangeMark, string> = {
@@ -65,7 +66,7 @@ export const ComponentNode = memo(function ComponentNode({ data, selected }: Nod
         </span>
       ) : null}
       {comments ? (
-        <span className="pointer-events-none absolute -bottom-2 -right-2 z-10 flex items-center gap-0.5 rounded-full border border-rule bg-paper-raised px-1 text-[10px] leading-4 text-ink" data-testid="comment-marker" aria-label={`${comments} comment thread${comments === 1 ? '' : 's'}`}>
+        <span className="pointer-events-none absolute -bottom-2 -right-2 z-10 flex items-center gap-0.5 rounded-full border border-rule bg-paper-raised px-1 text-[10px] leading-4 text-ink" data-testid="comment-marker" aria-label={countOf(comments, 'comment thread')}>
           <svg width="9" height="8" viewBox="0 0 9 8" aria-hidden="true">
             <path d="M1 1h7v4.5H4L2 7V5.5H1z" fill="none" stroke="currentColor" strokeWidth="1" strokeLinejoin="round" />
           </svg>

@@ -3,6 +3,7 @@
 import { useMemo, useState } from 'react';
 import type { DocumentDiff } from '@/engine/document/diff';
 import { changeTableRows, type ChangeRow } from './change-table';
+import { countOf } from '@/components/ui/count';
 
 type SortKey = 'order' | 'tag';
 
@@ -24,8 +25,8 @@ export function ChangeTable({ diff }: { diff: DocumentDiff }) {
   return (
     <div className="space-y-2" data-testid="change-table">
       <p className="text-sm text-ink">
-        {count(summary.components.added, 'part')} added, {count(summary.components.removed, 'part')} removed, {count(summary.components.changed, 'part')} changed;{' '}
-        {count(summary.tubes.added + summary.tubes.removed + summary.tubes.changed, 'tube')} and {count(summary.wires.added + summary.wires.removed + summary.wires.changed, 'wire')} touched.
+        {countOf(summary.components.added, 'part')} added, {countOf(summary.components.removed, 'part')} removed, {countOf(summary.components.changed, 'part')} changed;{' '}
+        {countOf(summary.tubes.added + summary.tubes.removed + summary.tubes.changed, 'tube')} and {countOf(summary.wires.added + summary.wires.removed + summary.wires.changed, 'wire')} touched.
         {!summary.affectsBehaviour ? ' Only the drawing changed: the circuit behaves as before.' : ''}
       </p>
       <div className="flex items-center gap-2 text-xs text-ink-soft">
@@ -41,7 +42,7 @@ export function ChangeTable({ diff }: { diff: DocumentDiff }) {
       {drawing.length ? (
         <div>
           <button type="button" onClick={() => setShowDrawing((s) => !s)} aria-expanded={showDrawing} className="text-xs text-accent underline">
-            {showDrawing ? 'Hide' : 'Show'} {count(drawing.length, 'drawing-only change')}
+            {showDrawing ? 'Hide' : 'Show'} {countOf(drawing.length, 'drawing-only change')}
           </button>
           {showDrawing ? <Rows rows={sorted(drawing)} caption="Changes to the drawing only" /> : null}
         </div>
@@ -85,4 +86,3 @@ function Rows({ rows, caption }: { rows: ChangeRow[]; caption: string }) {
   );
 }
 
-const count = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;

@@ -10,7 +10,6 @@ import type { RunFrame } from '@/components/editor/run/run-frame';
 import { FormAlert } from '@/components/forms/FormAlert';
 import { TabList } from '@/components/ui/TabList';
 import { TextLink } from '@/components/ui/TextLink';
-import { circuitDocumentSchema } from '@/engine/document/schema';
 import type { CircuitDetail } from '@/lib/circuits/get-circuit';
 import { ApprovalNote } from './ApprovalNote';
 import { ChangeLegend } from './ChangeLegend';
@@ -72,12 +71,8 @@ export function ComparePage({
   const [frame, setFrame] = useState<RunFrame | null>(null);
   const [runFocus, setRunFocus] = useState<{ runId: string; timeS: number } | undefined>(undefined);
 
-  const documents = useMemo(() => {
-    if (!comparison.data) return null;
-    const before = circuitDocumentSchema.safeParse(comparison.data.from.document);
-    const after = circuitDocumentSchema.safeParse(comparison.data.to.document);
-    return before.success && after.success ? { before: before.data, after: after.data } : null;
-  }, [comparison.data]);
+  // The server reads both drawings through the schema before it compares them.
+  const documents = useMemo(() => (comparison.data ? { before: comparison.data.from.document, after: comparison.data.to.document } : null), [comparison.data]);
   const same = from === to;
   const marks = useMemo(() => (comparison.data && !same ? marksOf(comparison.data.diff) : undefined), [comparison.data, same]);
   const removed = useMemo(() => (comparison.data && documents && !same ? removedOf(documents.before, comparison.data.diff) : undefined), [comparison.data, documents, same]);

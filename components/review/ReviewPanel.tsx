@@ -9,6 +9,7 @@ import { FormAlert } from '@/components/forms/FormAlert';
 import { fetchMembers, membersKey } from '@/components/members/members-api';
 import { Button } from '@/components/ui/Button';
 import { useCan } from '@/components/workspace/use-current-workspace';
+import type { ReviewDecision } from '@/lib/reviews/schemas';
 import { decideReview, fetchCircuitReviews, requestReview, reviewKeys, reviewStateLabel, withdrawReview, type ReviewItem } from './review-api';
 
 /**
@@ -68,7 +69,7 @@ export function ReviewPanel({
 
 function ReviewCard({ review, me, canDecide, onChanged }: { review: ReviewItem; me: string | undefined; canDecide: boolean; onChanged: () => void }) {
   const [note, setNote] = useState('');
-  const decide = useMutation({ mutationFn: (decision: 'approve' | 'request_changes') => decideReview(review.id, decision, note.trim()), onSuccess: onChanged });
+  const decide = useMutation({ mutationFn: (decision: ReviewDecision) => decideReview(review.id, decision, note.trim()), onSuccess: onChanged });
   const withdraw = useMutation({ mutationFn: () => withdrawReview(review.id), onSuccess: onChanged });
   const open = review.state === 'requested' && !review.stale;
   const mine = review.reviewers.some((r) => r.id === me);

@@ -1,19 +1,18 @@
 'use client';
 
 import '@xyflow/react/dist/style.css';
-import { Background, BackgroundVariant, ConnectionMode, Controls, ReactFlow, ReactFlowProvider, type EdgeTypes, type NodeTypes } from '@xyflow/react';
+import { Background, BackgroundVariant, ConnectionMode, Controls, ReactFlow, ReactFlowProvider } from '@xyflow/react';
 import { useMemo } from 'react';
-import { ComponentNode } from '@/components/editor/ComponentNode';
-import { ConnectionEdge } from '@/components/editor/ConnectionEdge';
+import { CANVAS_EDGE_TYPES, CANVAS_NODE_TYPES } from '@/components/editor/canvas-types';
 import { edgesOf, nodesOf, type ChangeMark, type ComponentFlowNode, type ConnectionFlowEdge } from '@/components/editor/flow-mapping';
-import { rampColour, rampTopBar } from '@/components/editor/run/pressure-ramp';
+import { rampTopBar } from '@/components/editor/run/pressure-ramp';
+import { edgeInRun } from '@/components/editor/run/run-edges';
 import { RunContext, type RunView } from '@/components/editor/run/run-context';
 import type { RunFrame } from '@/components/editor/run/run-frame';
 import type { CircuitDocument } from '@/engine/document/schema';
 import type { CommentAnchor } from './review-api';
+import { countOf } from '@/components/ui/count';
 
-const NODE_TYPES: NodeTypes = { component: ComponentNode };
-const EDGE_TYPES: EdgeTypes = { connection: ConnectionEdge };
 const NOTHING = { components: [], tubes: [], wires: [] };
 
 /** Stroke of a tube or wire by how it changed, in the same key as the parts. */
@@ -77,12 +76,11 @@ function Drawing({ document, removed, marks, comments, picked, onPick, frame }: 
   const edges = useMemo<ConnectionFlowEdge[]>(() => {
     const topBar = rampTopBar(frame?.highestBar ?? 0);
     const shown = edgesOf(document, selection).map((e) => {
+      // A replay shows the run's colours; the change marks return when it is closed.
+      if (frame) return edgeInRun(e, frame, topBar);
       const mark = e.data?.kind === 'wire' ? marks?.wires.get(e.id) : marks?.tubes.get(e.id);
-      const bar = frame?.tubeBar.get(e.id);
-      if (bar !== undefined) return { ...e, style: { stroke: rampColour(bar / topBar), strokeWidth: 3 } };
-      if (e.data?.kind === 'wire' && frame) return { ...e, className: `${e.className ?? ''} ${frame.liveWires.has(e.id) ? 'airproof-wire-live' : 'airproof-wire-dead'}` };
       const threads = comments?.get(e.id);
-      const label = threads ? `${threads} comment${threads === 1 ? '' : 's'}` : undefined;
+      const label = threads ? countOf(threads, 'comment') : undefined;
       return mark ? { ...e, style: EDGE_MARK[mark], label } : label ? { ...e, label } : e;
     });
     const ghosts = removed ? edgesOf(removed, NOTHING).map((e) => ({ ...e, style: EDGE_MARK.removed, selectable: false })) : [];
@@ -99,8 +97,8 @@ function Drawing({ document, removed, marks, comments, picked, onPick, frame }: 
         <ReactFlow<ComponentFlowNode, ConnectionFlowEdge>
           nodes={nodes}
           edges={edges}
-          nodeTypes={NODE_TYPES}
-          edgeTypes={EDGE_TYPES}
+          nodeTypes={CANVAS_NODE_TYPES}
+          edgeTypes={CANVAS_EDGE_TYPES}
           // Every port is a source handle (air has no set direction), so tubes must be found in loose mode.
           connectionMode={ConnectionMode.Loose}
           nodesDraggable={false}

@@ -1,9 +1,9 @@
 import { requestJson, sendJson } from '@/components/api/request-json';
 import type { InputEvent } from '@/engine/solver/simulate';
 import type { Trace } from '@/engine/trace/trace';
-import type { RevisionComparison } from '@/lib/circuits/compare-revisions';
-import type { RevisionDetail } from '@/lib/circuits/revision-view';
+import type { CheckedRevision, RevisionComparison } from '@/lib/circuits/compare-revisions';
 import type { ReviewView } from '@/lib/reviews/review-view';
+import type { ReviewDecision } from '@/lib/reviews/schemas';
 import type { RevisionReview, RevisionPage } from '@/lib/circuits/list-revisions';
 import type { ReviewPage } from '@/lib/reviews/list-reviews';
 import type { CommentAnchor } from '@/models/comment';
@@ -16,7 +16,7 @@ export type { CommentAnchor } from '@/models/comment';
 export type { CommentReply, CommentThread } from '@/lib/comments/list-comments';
 
 /** The comparison as the page reads it: both revisions (it always names both) and what changed. */
-export type Comparison = Omit<RevisionComparison, 'from'> & { from: RevisionDetail };
+export type Comparison = Omit<RevisionComparison, 'from'> & { from: CheckedRevision };
 
 export const reviewKeys = {
   revisions: (circuitId: string, page: number) => ['circuits', circuitId, 'revisions', page] as const,
@@ -53,7 +53,7 @@ export const restoreRevision = (circuitId: string, number: number, expectedLockV
 export const requestReview = (circuitId: string, body: { revisionNumber: number; reviewerIds: string[]; message: string }) =>
   sendJson<{ id: string }>('POST', `${circuitBase(circuitId)}/reviews`, body);
 
-export const decideReview = (reviewId: string, decision: 'approve' | 'request_changes', note: string) =>
+export const decideReview = (reviewId: string, decision: ReviewDecision, note: string) =>
   sendJson<unknown>('POST', `/api/reviews/${encodeURIComponent(reviewId)}/decision`, { decision, ...(note ? { note } : {}) });
 
 export const withdrawReview = (reviewId: string) => sendJson<unknown>('POST', `/api/reviews/${encodeURIComponent(reviewId)}/withdraw`);

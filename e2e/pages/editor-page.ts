@@ -70,6 +70,22 @@ export class EditorPage {
     await expect(this.editor()).toBeVisible();
   }
 
+  /** A point on some tube of the drawing that no part covers, in page coordinates. */
+  async pointOnTube(): Promise<{ x: number; y: number }> {
+    const point = await this.page.evaluate(() => {
+      for (const path of document.querySelectorAll<SVGPathElement>('.react-flow__edge.airproof-tube path.react-flow__edge-interaction')) {
+        for (let share = 0.1; share < 0.95; share += 0.1) {
+          const at = path.getPointAtLength(path.getTotalLength() * share);
+          const screen = new DOMPoint(at.x, at.y).matrixTransform(path.getScreenCTM()!);
+          if (document.elementFromPoint(screen.x, screen.y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge')) return { x: screen.x, y: screen.y };
+        }
+      }
+      return null;
+    });
+    if (!point) throw new Error('no tube on screen');
+    return point;
+  }
+
   async runTime(): Promise<number> {
     return Number(await this.page.getByTestId('run-time').getAttribute('data-t'));
   }

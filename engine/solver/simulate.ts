@@ -60,11 +60,7 @@ interface Timer {
  * fixed iteration order). A model runs once: compile the document again for another run.
  */
 export function simulate(model: SolverModel, inputs: readonly InputEvent[], options: SimulationOptions, sink?: TraceSink): Trace {
-  // Components keep their state (valve positions, relay contacts) in the model they were built into.
-  if (ran.has(model)) throw new Error('a compiled model runs once: compile the document again for another run');
-  ran.add(model);
-  const run = new Run(model, options, sink);
-  run.begin([...inputs].sort((a, b) => a.t - b.t));
+  const run = begin(model, options, sink, inputs);
   run.advance(options.untilS);
   return run.finish();
 }
@@ -78,6 +74,12 @@ export interface SteppedSimulation {
   readonly finished: boolean;
   /** Runs on until every part has reached this machine time, sending the rows that are settled. */
   advance(toS: number): void;
+  /**
+   * Runs on until every row up to this machine time has gone to the sink (or the run has ended).
+   * A part that has just come to rest keeps its last step open, so its rows can lag the time
+   * reached: the run goes on an output interval at a time until they are out.
+   */
+  advanceUntilSent(toS: number): void;
   /** The earliest machine time an input given now can act at. */
   earliestInputTime(): number;
   /** Takes an input at its time, or at the earliest time still open if that is later; returns it as applied. */
@@ -92,6 +94,11 @@ export interface SteppedSimulation {
  * late acts exactly as if it had been known from the start.
  */
 export function startSimulation(model: SolverModel, options: SimulationOptions, sink: TraceSink, inputs: readonly InputEvent[] = []): SteppedSimulation {
+  return begin(model, options, sink, inputs);
+}
+
+function begin(model: SolverModel, options: SimulationOptions, sink: TraceSink | undefined, inputs: readonly InputEvent[]): Run {
+  // Components keep their state (valve positions, relay contacts) in the model they were built into.
   if (ran.has(model)) throw new Error('a compiled model runs once: compile the document again for another run');
   ran.add(model);
   const run = new Run(model, options, sink);
@@ -374,6 +381,12 @@ class Run implements GuardSource, OutputRows, SteppedSimulation {
       if (next >= this.untilS - SAME_TIME_S) this.finished = true;
     }
     if (!this.finished) this.flushRows(Math.min(this.nextInstant(), this.settledUntil()), false);
+  }
+
+  advanceUntilSent(toS: number): void {
+    const target = Math.min(toS, this.untilS);
+    const lastRow = Math.floor(target / this.intervalS + 1e-9);
+    for (let limit = target; !this.finished && this.firstPending <= lastRow; limit = Math.min(this.untilS, limit + this.intervalS)) this.advance(limit);
   }
 
   /** The earliest time any partition's rows may still change. */

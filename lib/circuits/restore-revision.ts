@@ -1,7 +1,6 @@
 import 'server-only';
-import { circuitDocumentSchema } from '@/engine/document/schema';
 import { appendRevision } from '@/lib/circuits/append-revision';
-import { findCircuit, findRevision } from '@/lib/circuits/revision-view';
+import { documentOf, findCircuit, findRevision } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
 
 /**
@@ -31,8 +30,7 @@ export async function restoreRevision({
     workspaceId,
     circuitId,
     authorId,
-    // Read through the schema so that fields given defaults since it was saved are filled in.
-    document: circuitDocumentSchema.parse(source.document),
+    document: documentOf(source, 'number'),
     message: message ?? `Restored revision ${number}`,
     expectedLockVersion,
     restoredFrom: number,

@@ -1,5 +1,7 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
+import { validateDocument } from '@/engine/document/validate';
+import type { CircuitDocument } from '@/engine/document/schema';
 import { AppError } from '@/lib/errors';
 import { personOf, type Person } from '@/lib/person';
 import { Circuit, CircuitRevision, User } from '@/models';
@@ -24,6 +26,16 @@ export function revisionSummary(revision: RevisionWithAuthor): RevisionSummary {
 
 export function revisionDetail(revision: RevisionWithAuthor): RevisionDetail {
   return { ...revisionSummary(revision), document: revision.document };
+}
+
+/**
+ * A revision's drawing read through the schema, so that fields given defaults since it was saved
+ * are filled in. One this version cannot read is `invalid` on `field`, naming the first problem.
+ */
+export function documentOf(revision: CircuitRevision, field: string): CircuitDocument {
+  const checked = validateDocument(revision.document);
+  if (checked.ok) return checked.document;
+  throw new AppError('invalid', field, `Revision ${revision.number} holds a drawing this version of Airproof cannot read: ${checked.messages[0]}`, field);
 }
 
 /** The circuit of the workspace, or `not_found:circuit`: another workspace's circuit is never admitted to exist. */

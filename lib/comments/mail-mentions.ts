@@ -2,7 +2,7 @@ import 'server-only';
 import { mentionedMembers } from '@/lib/comments/mentions';
 import { sendMail } from '@/lib/mail/mailer';
 import { commentMentionMail } from '@/lib/mail/templates';
-import { Membership, User } from '@/models';
+import { listMembers } from '@/lib/workspaces/members';
 
 /**
  * E-mails the workspace members a comment mentions, except its author and anyone the body
@@ -25,13 +25,9 @@ export async function mailMentions({
   previousBody?: string;
 }): Promise<void> {
   if (!body.includes('@')) return;
-  const memberships = (await Membership.findAll({
-    where: { workspaceId },
-    include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
-    order: [['createdAt', 'ASC']],
-  })) as Array<Membership & { user: User }>;
-  const author = memberships.find((m) => m.userId === authorId)?.user.name ?? 'A colleague';
-  const others = memberships.filter((m) => m.userId !== authorId).map((m) => ({ userId: m.userId, name: m.user.name, email: m.user.email }));
+  const members = await listMembers({ workspaceId });
+  const author = members.find((m) => m.userId === authorId)?.name ?? 'A colleague';
+  const others = members.filter((m) => m.userId !== authorId);
   const before = new Set(previousBody === undefined ? [] : mentionedMembers(previousBody, others).map((m) => m.userId));
   for (const member of mentionedMembers(body, others)) {
     if (before.has(member.userId)) continue;

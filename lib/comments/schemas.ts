@@ -7,7 +7,7 @@ export const commentIdSchema = z.string().uuid('not a comment id');
 const documentId = z.string().min(1).max(64);
 
 /** The kinds of `CommentAnchor` (models/comment.ts). */
-export const commentAnchorSchema = z.discriminatedUnion('kind', [
+const commentAnchorSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('circuit') }).strict(),
   z.object({ kind: z.literal('component'), componentId: documentId }).strict(),
   z.object({ kind: z.literal('tube'), tubeId: documentId }).strict(),

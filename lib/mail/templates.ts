@@ -1,5 +1,6 @@
 import { serverEnv } from '@/lib/env';
 import type { OutgoingMail } from '@/lib/mail/mailer';
+import type { ReviewDecision } from '@/lib/reviews/schemas';
 
 const SAFETY_LINE =
   'Airproof results support, and never replace, a risk assessment under the applicable machinery-safety standards, local codes and a competent person’s sign-off.';
@@ -82,7 +83,7 @@ export function reviewRequestedMail({ to, reviewerName, requesterName, message, 
   });
 }
 
-export function reviewDecidedMail({ to, requesterName, deciderName, decision, note, ...review }: ReviewMailSubject & { to: string; requesterName: string; deciderName: string; decision: 'approve' | 'request_changes'; note: string | null }): OutgoingMail {
+export function reviewDecidedMail({ to, requesterName, deciderName, decision, note, ...review }: ReviewMailSubject & { to: string; requesterName: string; deciderName: string; decision: ReviewDecision; note: string | null }): OutgoingMail {
   const what = `revision ${review.revisionNumber} of “${review.circuitTitle}”`;
   return compose({
     to,

@@ -15,7 +15,7 @@ export const requestReviewBodySchema = z
   .strict();
 export type RequestReviewBody = z.infer<typeof requestReviewBodySchema>;
 
-export const REVIEW_DECISIONS = ['approve', 'request_changes'] as const;
+const REVIEW_DECISIONS = ['approve', 'request_changes'] as const;
 export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
 
 export const decideReviewBodySchema = z
@@ -27,7 +27,7 @@ export const decideReviewBodySchema = z
 export type DecideReviewBody = z.infer<typeof decideReviewBodySchema>;
 
 /** waiting: open requests naming me as a reviewer; requested: the requests I made, in any state. */
-export const REVIEW_BOXES = ['waiting', 'requested'] as const;
+const REVIEW_BOXES = ['waiting', 'requested'] as const;
 
 export const listReviewsQuerySchema = z.object({
   box: z.enum(REVIEW_BOXES, 'either waiting or requested').default('waiting'),

@@ -2,11 +2,9 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { promisify } from 'node:util';
 import { gzip } from 'node:zlib';
-import { circuitDocumentSchema } from '@/engine/document/schema';
 import type { Actor } from '@/lib/auth/actor';
-import { findCircuit, findRevision } from '@/lib/circuits/revision-view';
+import { documentOf, findCircuit, findRevision } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
-import { AppError } from '@/lib/errors';
 import type { SaveRunBody } from '@/lib/runs/schemas';
 import { simulateSavedRun } from '@/lib/runs/simulate-saved-run';
 import { putObject } from '@/lib/storage/object-store';
@@ -27,9 +25,7 @@ export async function saveRun({ actor, circuitId, input }: { actor: Actor; circu
   const sequelize = getSequelize();
   await findCircuit({ workspaceId: actor.workspaceId, circuitId });
   const revision = await findRevision({ circuitId, number: input.revisionNumber, field: 'revisionNumber' });
-  const document = circuitDocumentSchema.safeParse(revision.document);
-  if (!document.success) throw new AppError('invalid', 'revisionNumber', `Revision ${revision.number} holds a document this version of Airproof cannot read`, 'revisionNumber');
-  const { trace, summary } = simulateSavedRun({ document: document.data, inputs: input.inputs, untilS: input.untilS });
+  const { trace, summary } = simulateSavedRun({ document: documentOf(revision, 'revisionNumber'), inputs: input.inputs, untilS: input.untilS });
   const body = await gzipAsync(JSON.stringify(trace));
   const id = randomUUID();
   await sequelize.transaction(async (transaction) => {

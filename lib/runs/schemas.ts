@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { inputEventSchema } from '@/engine/solver/inputs';
-import { LIVE_RUN_HORIZON_S } from '@/lib/runs/simulate-saved-run';
+import { LIVE_RUN_HORIZON_S } from '@/lib/runs/live-run';
 
 export const runIdSchema = z.string().uuid('not a run id');
 

@@ -3,17 +3,10 @@ import { compile } from '@/engine/solver/compile';
 import { startSimulation, type InputEvent } from '@/engine/solver/simulate';
 import { MemoryTraceSink, type SignalUnit, type Trace, type TraceEvent, type TraceSink } from '@/engine/trace/trace';
 import { AppError } from '@/lib/errors';
-
-/**
- * The horizon and output interval of the live run in the editor (components/editor/run/use-live-run.ts).
- * The engine's last steps before its horizon are cut short, so rows near the end depend on it: a
- * saved run has to be simulated towards the same horizon to give the rows the person watched.
- */
-export const LIVE_RUN_HORIZON_S = 600;
-export const LIVE_RUN_INTERVAL_S = 0.01;
+import { LIVE_RUN_HORIZON_S, LIVE_RUN_INTERVAL_S } from './live-run';
 
 /** Most values (signals × rows) a saved trace may hold: about 200 MB of JSON, which is read back whole. */
-export const SAVED_RUN_MAX_VALUES = 10_000_000;
+const SAVED_RUN_MAX_VALUES = 10_000_000;
 
 export interface RunSummary {
   untilS: number;
@@ -32,7 +25,6 @@ export interface RunSummary {
 class StretchSink implements TraceSink {
   readonly memory = new MemoryTraceSink();
   signalCount = 0;
-  rows = 0;
 
   constructor(
     private readonly lastRow: number,
@@ -47,7 +39,6 @@ class StretchSink implements TraceSink {
   sample(t: number, values: Float64Array): void {
     if (Math.round(t / LIVE_RUN_INTERVAL_S) > this.lastRow) return;
     this.memory.sample(t, values);
-    this.rows += 1;
   }
 
   event(event: TraceEvent): void {
@@ -75,8 +66,7 @@ export function simulateSavedRun({ document, inputs, untilS }: { document: Circu
     const longestS = Math.floor((rowsAllowed - 1) * LIVE_RUN_INTERVAL_S);
     throw new AppError('invalid', 'untilS', `A saved run of this drawing (${sink.signalCount} signals) can be at most ${longestS} s long`, 'untilS');
   }
-  // A part that has just come to rest keeps its last step open, so its rows can lag the time reached.
-  for (let toS = untilS; sink.rows <= lastRow && !run.finished; toS = Math.min(LIVE_RUN_HORIZON_S, toS + LIVE_RUN_INTERVAL_S)) run.advance(toS);
+  run.advanceUntilSent(untilS);
   const trace = sink.memory.toTrace(LIVE_RUN_INTERVAL_S, run.finish().stats);
   return { trace, summary: summarise(trace, untilS) };
 }

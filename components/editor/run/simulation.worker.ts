@@ -10,11 +10,6 @@ declare const self: DedicatedWorkerGlobalScope;
 
 /** Machine time simulated between looks at the mailbox: keeps inputs and stops prompt when running far ahead. */
 const PIECE_S = 0.25;
-/**
- * Rows settle a step behind the engine (a part's last step may still be undone), so once the
- * engine has reached the target it goes on by this much at a time until the rows have too.
- */
-const NUDGE_S = 0.02;
 
 /** Collects the rows and events that settle during one piece of work, to send them in one message. */
 class Outbox implements TraceSink {
@@ -50,7 +45,7 @@ class Outbox implements TraceSink {
   }
 }
 
-let current: { runId: number; simulation: SteppedSimulation; outbox: Outbox; reached: number; target: number; untilS: number; busy: boolean } | null = null;
+let current: { runId: number; simulation: SteppedSimulation; outbox: Outbox; target: number } | null = null;
 
 /** The rows the page asked for have not all been sent yet. */
 const behind = (run: NonNullable<typeof current>) => !run.simulation.finished && run.simulation.sentUpTo < run.target;
@@ -58,12 +53,10 @@ const behind = (run: NonNullable<typeof current>) => !run.simulation.finished &&
 /** Works towards the target a piece at a time, sending what settled after each piece. */
 function pump(): void {
   const run = current;
-  if (!run || run.busy || !behind(run)) return;
-  run.busy = true;
+  if (!run || !behind(run)) return;
   const started = performance.now();
-  run.reached = Math.min(run.untilS, run.reached < run.target ? Math.min(run.target, run.reached + PIECE_S) : run.reached + NUDGE_S);
   try {
-    run.simulation.advance(run.reached);
+    run.simulation.advanceUntilSent(Math.min(run.target, run.simulation.sentUpTo + PIECE_S));
   } catch (error) {
     const reply: RunReply = { kind: 'failed', runId: run.runId, message: error instanceof Error ? error.message : String(error), diagnostics: [] };
     self.postMessage(reply);
@@ -71,7 +64,6 @@ function pump(): void {
     return;
   }
   run.outbox.send(run.runId, run.simulation.finished, performance.now() - started);
-  run.busy = false;
   // Let waiting messages (an input, a new target, a stop) in before the next piece.
   if (behind(run)) setTimeout(pump, 0);
 }
@@ -88,7 +80,7 @@ self.onmessage = (event: MessageEvent<RunRequest>) => {
     }
     const outbox = new Outbox();
     const simulation = startSimulation(model, { untilS: request.untilS, intervalS: request.intervalS }, outbox);
-    current = { runId: request.runId, simulation, outbox, reached: 0, target: 0, untilS: request.untilS, busy: false };
+    current = { runId: request.runId, simulation, outbox, target: 0 };
     const flows = flowColumns(request.document, model, outbox.names);
     const reply: RunReply = { kind: 'started', runId: request.runId, names: outbox.names, intervalS: simulation.intervalS, flows };
     self.postMessage(reply);

@@ -2,17 +2,15 @@
 
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { CircuitDocument } from '@/engine/document/schema';
+import { LIVE_RUN_HORIZON_S, LIVE_RUN_INTERVAL_S } from '@/lib/runs/live-run';
 import type { InputEvent } from '@/engine/solver/simulate';
 import { LiveTrace } from './live-trace';
 import type { RunTrace } from './run-frame';
 import type { RunReply, RunRequest } from './run-protocol';
 import type { FlowColumns } from './flow-columns';
 
-/** The longest run, s of machine time: ten minutes, less for a drawing with very many signals (see runLimitS). */
-export const LONGEST_RUN_S = 600;
 /** Values a run may keep on the page (single precision: 4 bytes each), so that a long run of a big drawing stays within memory. */
 const KEPT_VALUES = 25_000_000;
-const OUTPUT_INTERVAL_S = 0.01;
 /** Playback speeds, machine seconds per wall second; Infinity runs as fast as the engine goes. */
 export const RUN_SPEEDS = [0.1, 0.25, 0.5, 1, 2, 5, 10, Infinity] as const;
 /**
@@ -28,7 +26,7 @@ export type RunStatus = 'stopped' | 'starting' | 'playing' | 'paused' | 'ended' 
 /** How long a run of a drawing with this many signals may go on, s. */
 export function runLimitS(signals: number): number {
   const rows = Math.floor(KEPT_VALUES / Math.max(1, signals));
-  return Math.min(LONGEST_RUN_S, Math.floor(rows * OUTPUT_INTERVAL_S));
+  return Math.min(LIVE_RUN_HORIZON_S, Math.floor(rows * LIVE_RUN_INTERVAL_S));
 }
 
 /**
@@ -48,7 +46,7 @@ export function useLiveRun() {
   const [pace, setPace] = useState<number | null>(null);
   /** The playback has caught up with the engine and waits for it. */
   const [waiting, setWaiting] = useState(false);
-  const [limitS, setLimitS] = useState(LONGEST_RUN_S);
+  const [limitS, setLimitS] = useState(LIVE_RUN_HORIZON_S);
   const [flows, setFlows] = useState<FlowColumns>({ ports: {}, tubes: {} });
   const worker = useRef<Worker | null>(null);
   const runId = useRef(0);
@@ -56,7 +54,7 @@ export function useLiveRun() {
   const finished = useRef(false);
   const applied = useRef<InputEvent[]>([]);
   const work = useRef({ machineS: 0, wallMs: 0 });
-  const clock = useRef({ t: 0, last: 0, speed: 1 as number, playing: false, stepTo: 0, limit: LONGEST_RUN_S });
+  const clock = useRef({ t: 0, last: 0, speed: 1 as number, playing: false, stepTo: 0, limit: LIVE_RUN_HORIZON_S });
 
   const send = useCallback((request: RunRequest) => worker.current?.postMessage(request), []);
 
@@ -123,14 +121,14 @@ export function useLiveRun() {
       finished.current = false;
       applied.current = [];
       work.current = { machineS: 0, wallMs: 0 };
-      clock.current = { t: 0, last: performance.now(), speed: clock.current.speed, playing: false, stepTo: 0, limit: LONGEST_RUN_S };
+      clock.current = { t: 0, last: performance.now(), speed: clock.current.speed, playing: false, stepTo: 0, limit: LIVE_RUN_HORIZON_S };
       setT(0);
       setTrace(null);
       setMessage(null);
       setPace(null);
       setWaiting(false);
       setStatus('starting');
-      send({ kind: 'start', runId: runId.current, document, untilS: LONGEST_RUN_S, intervalS: OUTPUT_INTERVAL_S });
+      send({ kind: 'start', runId: runId.current, document, untilS: LIVE_RUN_HORIZON_S, intervalS: LIVE_RUN_INTERVAL_S });
     },
     [onReply, send],
   );
@@ -172,7 +170,7 @@ export function useLiveRun() {
   const step = useCallback(() => {
     const c = clock.current;
     if (c.playing) return;
-    c.stepTo = Math.min(c.limit, Math.max(c.t, c.stepTo) + OUTPUT_INTERVAL_S);
+    c.stepTo = Math.min(c.limit, Math.max(c.t, c.stepTo) + LIVE_RUN_INTERVAL_S);
     const available = live.current?.lastTime ?? 0;
     if (available >= c.stepTo - 1e-9) {
       c.t = c.stepTo;
@@ -201,7 +199,7 @@ export function useLiveRun() {
         c.last = now;
         setT(c.t);
         const atEnd = c.t >= c.limit - 1e-9 || (finished.current && c.t >= available);
-        setWaiting(!atEnd && wanted > available + OUTPUT_INTERVAL_S);
+        setWaiting(!atEnd && wanted > available + LIVE_RUN_INTERVAL_S);
         if (atEnd) {
           c.playing = false;
           setStatus('ended');
@@ -217,5 +215,5 @@ export function useLiveRun() {
 
   useEffect(() => () => worker.current?.terminate(), []);
 
-  return { status, trace, t, speed, message, pace, waiting, limitS, flows, applied, intervalS: OUTPUT_INTERVAL_S, start, pause, resume, reset, act, step, changeSpeed };
+  return { status, trace, t, speed, message, pace, waiting, limitS, flows, applied, intervalS: LIVE_RUN_INTERVAL_S, start, pause, resume, reset, act, step, changeSpeed };
 }

@@ -4,7 +4,8 @@ import { circuitDocumentSchema, emptyDocument } from '@/engine/document/schema';
 import { compile } from '@/engine/solver/compile';
 import { simulate, type InputEvent } from '@/engine/solver/simulate';
 import type { Trace } from '@/engine/trace/trace';
-import { LIVE_RUN_HORIZON_S, simulateSavedRun } from '@/lib/runs/simulate-saved-run';
+import { LIVE_RUN_HORIZON_S } from '@/lib/runs/live-run';
+import { simulateSavedRun } from '@/lib/runs/simulate-saved-run';
 
 const document = circuitDocumentSchema.parse(JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.json', 'utf8')));
 const inputs = JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.inputs.json', 'utf8')) as InputEvent[];
