@@ -6,101 +6,151 @@
  * the fill pattern symbolically, and refactor numerically each step from a flat
  * value array through precomputed slot lists.
  */
+/**
+ * The symbolic part of the factorisation: elimination order, fill pattern and the slot lists
+ * that factor() and the solves walk. It depends on the pattern only, and partitions of the same
+ * shape are common (a circuit's repeated cells, every run of the same circuit), so it is worked
+ * out once per pattern and shared; each SparseLu keeps only its own values.
+ */
+interface Symbolic {
+  readonly size: number;
+  /** Elimination order: order position → original index. */
+  readonly perm: Int32Array;
+  /** Original index → order position. */
+  readonly inv: Int32Array;
+  readonly slotOf: ReadonlyMap<number, number>;
+  readonly diagSlot: Int32Array;
+  /** Pivot k owns entries ptr[k] … ptr[k + 1] − 1 of the flat lists: row/column, lower slot, upper slot. */
+  readonly ptr: Int32Array;
+  readonly flatIndex: Int32Array;
+  readonly flatLow: Int32Array;
+  readonly flatUp: Int32Array;
+  /** Update triples: target slot, lower slot, upper slot. */
+  readonly updates: Int32Array;
+  readonly slots: number;
+}
+
+/** Patterns analysed so far; bounded so that a long-lived worker editing many circuits does not grow without end. */
+const symbolicCache = new Map<string, Symbolic>();
+const SYMBOLIC_CACHE_LIMIT = 512;
+
+function symbolicOf(size: number, pattern: ReadonlyArray<readonly [number, number]>): Symbolic {
+  let key = String(size);
+  for (const [i, j] of pattern) key += `,${i}:${j}`;
+  let symbolic = symbolicCache.get(key);
+  if (!symbolic) {
+    symbolic = analyse(size, pattern);
+    if (symbolicCache.size >= SYMBOLIC_CACHE_LIMIT) symbolicCache.delete(symbolicCache.keys().next().value!);
+    symbolicCache.set(key, symbolic);
+  }
+  return symbolic;
+}
+
+function analyse(size: number, pattern: ReadonlyArray<readonly [number, number]>): Symbolic {
+  const adjacency: Set<number>[] = Array.from({ length: size }, () => new Set<number>());
+  for (const [i, j] of pattern) {
+    if (i === j) continue;
+    adjacency[i]!.add(j);
+    adjacency[j]!.add(i);
+  }
+  const perm = minimumDegreeOrder(adjacency.map((s) => new Set(s)));
+  const inv = new Int32Array(size);
+  perm.forEach((orig, pos) => (inv[orig] = pos));
+
+  // Symbolic elimination in order positions.
+  const higher: Set<number>[] = Array.from({ length: size }, () => new Set<number>());
+  for (let i = 0; i < size; i += 1) {
+    for (const j of adjacency[i]!) {
+      const a = inv[i]!;
+      const b = inv[j]!;
+      if (a < b) higher[a]!.add(b);
+      else higher[b]!.add(a);
+    }
+  }
+  for (let k = 0; k < size; k += 1) {
+    const nbrs = [...higher[k]!].sort((x, y) => x - y);
+    for (let x = 0; x < nbrs.length; x += 1) {
+      for (let y = x + 1; y < nbrs.length; y += 1) higher[nbrs[x]!]!.add(nbrs[y]!);
+    }
+  }
+  // For each pivot k: the rows/columns it meets, and its lower slots (i,k) and upper slots (k,j), in order positions.
+  const slotOf = new Map<number, number>();
+  const cross: Int32Array[] = [];
+  const lowSlots: Int32Array[] = [];
+  const upSlots: Int32Array[] = [];
+  let slots = 0;
+  const diagSlot = new Int32Array(size);
+  for (let k = 0; k < size; k += 1) diagSlot[k] = slots++;
+  for (let k = 0; k < size; k += 1) {
+    const cols = Int32Array.from([...higher[k]!].sort((x, y) => x - y));
+    const up = new Int32Array(cols.length);
+    const low = new Int32Array(cols.length);
+    cols.forEach((j, n) => {
+      up[n] = slots;
+      slotOf.set(k * size + j, slots++);
+      low[n] = slots;
+      slotOf.set(j * size + k, slots++);
+    });
+    cross.push(cols);
+    upSlots.push(up);
+    lowSlots.push(low);
+  }
+  for (let k = 0; k < size; k += 1) slotOf.set(k * size + k, diagSlot[k]!);
+  const triples: number[] = [];
+  for (let k = 0; k < size; k += 1) {
+    const rows = cross[k]!;
+    for (let a = 0; a < rows.length; a += 1) {
+      for (let c = 0; c < rows.length; c += 1) {
+        const target = slotOf.get(rows[a]! * size + rows[c]!);
+        if (target === undefined) throw new Error('sparse LU: missing fill slot');
+        triples.push(target, lowSlots[k]![a]!, upSlots[k]![c]!);
+      }
+    }
+  }
+  const ptr = new Int32Array(size + 1);
+  for (let k = 0; k < size; k += 1) ptr[k + 1] = ptr[k]! + cross[k]!.length;
+  const flatIndex = new Int32Array(ptr[size]!);
+  const flatLow = new Int32Array(ptr[size]!);
+  const flatUp = new Int32Array(ptr[size]!);
+  for (let k = 0; k < size; k += 1) {
+    flatIndex.set(cross[k]!, ptr[k]!);
+    flatLow.set(lowSlots[k]!, ptr[k]!);
+    flatUp.set(upSlots[k]!, ptr[k]!);
+  }
+  return { size, perm, inv, slotOf, diagSlot, ptr, flatIndex, flatLow, flatUp, updates: Int32Array.from(triples), slots };
+}
+
 export class SparseLu {
   readonly size: number;
   /** Values of every stored entry of the permuted matrix (diagonal, upper, lower). */
   readonly values: Float64Array;
   /** Elimination order: order position → original index. */
   readonly perm: Int32Array;
-  private readonly inv: Int32Array; // original index → order position
-  private readonly slotOf = new Map<number, number>();
+  private readonly inv: Int32Array;
+  private readonly slotOf: ReadonlyMap<number, number>;
   private readonly diagSlot: Int32Array;
-  // The same lists flattened (pivot k owns entries ptr[k] … ptr[k + 1] − 1), for factor and solve.
   private readonly ptr: Int32Array;
   private readonly flatIndex: Int32Array;
   private readonly flatLow: Int32Array;
   private readonly flatUp: Int32Array;
-  // For each pivot k: lower slots (i,k) and upper slots (k,j), both in order positions.
-  private readonly lowRows: Int32Array[] = [];
-  private readonly lowSlots: Int32Array[] = [];
-  private readonly upCols: Int32Array[] = [];
-  private readonly upSlots: Int32Array[] = [];
-  // Update triples: target slot, lower slot, upper slot.
   private readonly updates: Int32Array;
   /** 1 / pivot of each order position, kept by factor() so that the solves multiply instead of dividing. */
   private readonly inversePivot: Float64Array;
 
   /** `pattern` lists the off-diagonal (row, column) pairs that can be non-zero, in original indices. */
   constructor(size: number, pattern: ReadonlyArray<readonly [number, number]>) {
+    const symbolic = symbolicOf(size, pattern);
     this.size = size;
-    const adjacency: Set<number>[] = Array.from({ length: size }, () => new Set<number>());
-    for (const [i, j] of pattern) {
-      if (i === j) continue;
-      adjacency[i]!.add(j);
-      adjacency[j]!.add(i);
-    }
-    this.perm = minimumDegreeOrder(adjacency.map((s) => new Set(s)));
-    this.inv = new Int32Array(size);
-    this.perm.forEach((orig, pos) => (this.inv[orig] = pos));
-
-    // Symbolic elimination in order positions.
-    const higher: Set<number>[] = Array.from({ length: size }, () => new Set<number>());
-    for (let i = 0; i < size; i += 1) {
-      for (const j of adjacency[i]!) {
-        const a = this.inv[i]!;
-        const b = this.inv[j]!;
-        if (a < b) higher[a]!.add(b);
-        else higher[b]!.add(a);
-      }
-    }
-    for (let k = 0; k < size; k += 1) {
-      const nbrs = [...higher[k]!].sort((x, y) => x - y);
-      for (let x = 0; x < nbrs.length; x += 1) {
-        for (let y = x + 1; y < nbrs.length; y += 1) higher[nbrs[x]!]!.add(nbrs[y]!);
-      }
-    }
-    let slots = 0;
-    this.diagSlot = new Int32Array(size);
-    for (let k = 0; k < size; k += 1) this.diagSlot[k] = slots++;
-    for (let k = 0; k < size; k += 1) {
-      const cols = Int32Array.from([...higher[k]!].sort((x, y) => x - y));
-      const up = new Int32Array(cols.length);
-      const low = new Int32Array(cols.length);
-      cols.forEach((j, n) => {
-        up[n] = slots;
-        this.slotOf.set(k * size + j, slots++);
-        low[n] = slots;
-        this.slotOf.set(j * size + k, slots++);
-      });
-      this.upCols.push(cols);
-      this.lowRows.push(cols);
-      this.upSlots.push(up);
-      this.lowSlots.push(low);
-    }
-    for (let k = 0; k < size; k += 1) this.slotOf.set(k * size + k, this.diagSlot[k]!);
-    const triples: number[] = [];
-    for (let k = 0; k < size; k += 1) {
-      const rows = this.lowRows[k]!;
-      for (let a = 0; a < rows.length; a += 1) {
-        for (let c = 0; c < rows.length; c += 1) {
-          const target = this.slotOf.get(rows[a]! * size + rows[c]!);
-          if (target === undefined) throw new Error('sparse LU: missing fill slot');
-          triples.push(target, this.lowSlots[k]![a]!, this.upSlots[k]![c]!);
-        }
-      }
-    }
-    this.updates = Int32Array.from(triples);
-    this.ptr = new Int32Array(size + 1);
-    for (let k = 0; k < size; k += 1) this.ptr[k + 1] = this.ptr[k]! + this.lowRows[k]!.length;
-    this.flatIndex = new Int32Array(this.ptr[size]!);
-    this.flatLow = new Int32Array(this.ptr[size]!);
-    this.flatUp = new Int32Array(this.ptr[size]!);
-    for (let k = 0; k < size; k += 1) {
-      this.flatIndex.set(this.lowRows[k]!, this.ptr[k]!);
-      this.flatLow.set(this.lowSlots[k]!, this.ptr[k]!);
-      this.flatUp.set(this.upSlots[k]!, this.ptr[k]!);
-    }
-    this.values = new Float64Array(slots);
+    this.perm = symbolic.perm;
+    this.inv = symbolic.inv;
+    this.slotOf = symbolic.slotOf;
+    this.diagSlot = symbolic.diagSlot;
+    this.ptr = symbolic.ptr;
+    this.flatIndex = symbolic.flatIndex;
+    this.flatLow = symbolic.flatLow;
+    this.flatUp = symbolic.flatUp;
+    this.updates = symbolic.updates;
+    this.values = new Float64Array(symbolic.slots);
     this.inversePivot = new Float64Array(size);
   }
 
