@@ -1,4 +1,4 @@
-import type { InputCommand, ParameterSpec, PortSpec } from './types';
+import type { InputCommand, ParameterSpec, PortSpec, RuntimeApi } from './types';
 
 /**
  * Parameter specs and terminal sets shared by the electrical component types.
@@ -55,3 +55,17 @@ export const hysteresisParam = (defaultM: number): ParameterSpec => ({
   max: 0.05,
   description: 'How much further the piston must move away before an actuated switch releases.',
 });
+
+/** A sensor's failure state: stuck on (reads actuated), stuck off, or null while it works. */
+export type StuckState = boolean | null;
+
+/**
+ * A sensor failure given as an input, `set` `stuck` with value 1 (stuck on), 0 (stuck off)
+ * or -1 (working again): the new state, announced as an event; undefined for any other input.
+ */
+export function stuckInput(command: InputCommand, api: RuntimeApi): StuckState | undefined {
+  if (command.action !== 'set' || command.parameter !== 'stuck' || command.value === undefined) return undefined;
+  const state: StuckState = command.value < 0 ? null : command.value > 0;
+  api.event(state === null ? 'working' : state ? 'stuck-on' : 'stuck-off');
+  return state;
+}

@@ -1,4 +1,4 @@
-import { hysteresisParam, terminals, windowParam } from './electrical-parameters';
+import { hysteresisParam, stuckInput, terminals, windowParam, type StuckState } from './electrical-parameters';
 import type { ComponentType, RuntimeApi } from './types';
 
 /**
@@ -7,6 +7,7 @@ import type { ComponentType, RuntimeApi } from './types';
  * that position, released once it is further than window + hysteresis away.
  * A mechanical limit switch has a changeover contact (11 common, 12 NC, 14 NO);
  * a three-wire sensor closes its output BK to its + lead BN while it detects.
+ * A failure can be given as an input: `set` `stuck` 1 (stuck on), 0 (stuck off), -1 (working again).
  */
 export function positionSwitch(def: { id: string; label: string; description: string; kind: 'changeover' | 'sensor'; windowM: number; hysteresisM: number }): ComponentType {
   return {
@@ -18,6 +19,7 @@ export function positionSwitch(def: { id: string; label: string; description: st
     ports: def.kind === 'changeover' ? terminals('11', '12', '14') : [...terminals('BN', 'BK'), { id: 'BU', role: 'terminal', label: 'BU (0 V)' }],
     parameters: { window: windowParam(def.windowM), hysteresis: hysteresisParam(def.hysteresisM) },
     states: ['released', 'actuated'],
+    inputs: ['set'],
     build(ctx) {
       const control = ctx.control();
       const links = ctx.actuationLinks();
@@ -27,11 +29,16 @@ export function positionSwitch(def: { id: string; label: string; description: st
         def.kind === 'changeover'
           ? [control.addContact(ctx.terminal('11'), ctx.terminal('12'), true, ctx.componentId), control.addContact(ctx.terminal('11'), ctx.terminal('14'), false, ctx.componentId)]
           : [control.addContact(ctx.terminal('BN'), ctx.terminal('BK'), false, ctx.componentId)];
+      // What the position calls for, kept apart from the output so that a stuck switch still tracks its hysteresis.
+      let sensed = false;
+      let stuck: StuckState = null;
       let actuated = false;
-      const reach = () => (actuated ? window + hysteresis : window);
+      const reach = () => (sensed ? window + hysteresis : window);
       const apply = (api: RuntimeApi, now: boolean) => {
-        if (now === actuated) return;
-        actuated = now;
+        sensed = now;
+        const output = stuck ?? sensed;
+        if (output === actuated) return;
+        actuated = output;
         api.event(actuated ? 'actuated' : 'released');
         control.setContacts(def.kind === 'changeover' ? [[contacts[0]!, !actuated], [contacts[1]!, actuated]] : [[contacts[0]!, actuated]], api);
       };
@@ -51,6 +58,12 @@ export function positionSwitch(def: { id: string; label: string; description: st
         },
         start(api) {
           apply(api, inside(api));
+        },
+        onInput(command, api) {
+          const next = stuckInput(command, api);
+          if (next === undefined) return;
+          stuck = next;
+          apply(api, sensed);
         },
         signals() {
           return { actuated: actuated ? 1 : 0 };

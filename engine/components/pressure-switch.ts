@@ -1,7 +1,10 @@
-import { terminals } from './electrical-parameters';
+import { stuckInput, terminals, type StuckState } from './electrical-parameters';
 import type { ComponentType, RuntimeApi } from './types';
 
-/** Pressure switch: a pneumatic sensing port and a changeover contact that operates above a set gauge pressure. */
+/**
+ * Pressure switch: a pneumatic sensing port and a changeover contact that operates above a set gauge pressure.
+ * A failure can be given as an input: `set` `stuck` 1 (stuck on), 0 (stuck off), -1 (working again).
+ */
 export const pressureSwitch: ComponentType = {
   id: 'pressure-switch',
   version: 1,
@@ -14,6 +17,7 @@ export const pressureSwitch: ComponentType = {
     hysteresis: { kind: 'number', quantity: 'pressure-difference', label: 'Hysteresis', default: 50_000, min: 0, max: 500_000, description: 'How far below the switching pressure it must fall to release.' },
   },
   states: ['released', 'operated'],
+  inputs: ['set'],
   build(ctx) {
     const control = ctx.control();
     const sense = ctx.port('1');
@@ -21,10 +25,14 @@ export const pressureSwitch: ComponentType = {
     const no = control.addContact(ctx.terminal('11'), ctx.terminal('14'), false, ctx.componentId);
     const set = ctx.num('setPressure');
     const hysteresis = ctx.num('hysteresis');
+    // What the pressure calls for, kept apart from the output so that a stuck switch still tracks its hysteresis.
+    let sensed = false;
+    let stuck: StuckState = null;
     let operated = false;
-    const margin = (api: RuntimeApi) => api.pressure(sense) - api.ambientPa() - (operated ? set - hysteresis : set);
+    const margin = (api: RuntimeApi) => api.pressure(sense) - api.ambientPa() - (sensed ? set - hysteresis : set);
     const apply = (api: RuntimeApi) => {
-      const now = margin(api) > 0 ? true : operated && margin(api) >= 0;
+      sensed = margin(api) > 0 ? true : sensed && margin(api) >= 0;
+      const now = stuck ?? sensed;
       if (now === operated) return;
       operated = now;
       api.event(operated ? 'operated' : 'released');
@@ -38,6 +46,12 @@ export const pressureSwitch: ComponentType = {
       },
       onGuard: (_i, _rising, api) => apply(api),
       start: apply,
+      onInput(command, api) {
+        const next = stuckInput(command, api);
+        if (next === undefined) return;
+        stuck = next;
+        apply(api);
+      },
       signals: () => ({ operated: operated ? 1 : 0 }),
     };
   },

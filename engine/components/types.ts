@@ -218,8 +218,10 @@ export interface ComponentType {
 
 /** What an electrical component registers with the control network (implemented in ../solver/control-network.ts). */
 export interface ControlNetwork {
-  /** The + (L+) and 0 V (M) rails of a DC supply. */
-  addSupply(plusNet: number, zeroNet: number): void;
+  /** The + (L+) and 0 V (M) rails of a DC supply; returns its index. */
+  addSupply(plusNet: number, zeroNet: number): number;
+  /** Switches a supply's output off (loss of control power) or on again, then settles the network. */
+  setSupplyPowered(supply: number, powered: boolean, api: RuntimeApi): void;
   /** A switching element between two nets; returns its index. `coil` names the coil it follows, if any. */
   addContact(a: number, b: number, closed: boolean, owner: string, coil?: string): number;
   /** A one-way element (a diode), conducting from anode to cathode only. */

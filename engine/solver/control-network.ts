@@ -47,6 +47,11 @@ export class ControlCircuit implements ControlNetwork {
   private readonly loads: Load[] = [];
   private readonly plus: number[] = [];
   private readonly zero: number[] = [];
+  /** Whether each supply gives power; a supply switched off leaves its rails dead. */
+  private readonly powered: boolean[] = [];
+  /** The rails of the supplies that give power, the ones a settle starts from. */
+  private livePlus: number[] = [];
+  private liveZero: number[] = [];
   private readonly tagOf: (componentId: string) => string;
   private netCount = 0;
   private settledAt = Number.NaN;
@@ -78,9 +83,24 @@ export class ControlCircuit implements ControlNetwork {
     return this.plus.length > 0;
   }
 
-  addSupply(plusNet: number, zeroNet: number): void {
+  addSupply(plusNet: number, zeroNet: number): number {
     this.plus.push(plusNet);
     this.zero.push(zeroNet);
+    this.powered.push(true);
+    this.pickLiveRails();
+    return this.plus.length - 1;
+  }
+
+  private pickLiveRails(): void {
+    this.livePlus = this.plus.filter((_, i) => this.powered[i]);
+    this.liveZero = this.zero.filter((_, i) => this.powered[i]);
+  }
+
+  setSupplyPowered(supply: number, powered: boolean, api: RuntimeApi): void {
+    if (this.powered[supply] === powered) return;
+    this.powered[supply] = powered;
+    this.pickLiveRails();
+    this.settle(api);
   }
 
   addContact(a: number, b: number, closed: boolean, owner: string, coil?: string): number {
@@ -153,8 +173,8 @@ export class ControlCircuit implements ControlNetwork {
       }
       return;
     }
-    const fromPlus = this.reach(this.plus, true);
-    const fromZero = this.reach(this.zero, false);
+    const fromPlus = this.reach(this.livePlus, true);
+    const fromZero = this.reach(this.liveZero, false);
     let shorted = false;
     for (let n = 0; n < this.netCount; n += 1) if (fromPlus[n] && fromZero[n]) shorted = true;
     this.live = shorted ? new Uint8Array(this.netCount) : fromPlus;
