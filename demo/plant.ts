@@ -41,4 +41,11 @@ export const DEMO_CIRCUITS: ReadonlyArray<{ file: string; title: string; descrip
     description: 'The press on a single-solenoid 5/2 valve: start and stop buttons latch K1, reed sensor 1B2 at the bottom starts dwell timer KT1, which ends the cycle; emergency stop S0 feeds every rung.',
     author: 'engineer',
   },
+  {
+    file: 'lid-press-two-hand-timed.json',
+    title: 'Lid press — timed two-hand start, 24 V DC',
+    description:
+      'S1 and S2 drive relays K1 and K2; either starts the 0.5 s window timer KT1. K3 picks up only through K1, K2 and the NC contact of KT1, so both hands within 0.5 s (ISO 13851 synchronous actuation), and holds itself while both stay pressed; a new stroke needs both released first. K3 drives solenoid 1M1 of the spring-return 5/2 valve.',
+    author: 'engineer',
+  },
 ];
