@@ -3,6 +3,7 @@ import { defineConfig } from '@playwright/test';
 // `npm test` exports the test ports (scripts/local-env.sh test); these defaults match them.
 const port = Number(process.env.PORT ?? 3100);
 const mailbox = process.env.MAILBOX_URL ?? 'http://127.0.0.1:2680';
+const workerHealth = process.env.WORKER_HEALTH_URL ?? 'http://127.0.0.1:4690';
 
 export default defineConfig({
   testDir: 'e2e',
@@ -25,6 +26,7 @@ export default defineConfig({
   projects: [{ name: 'chromium', use: { browserName: 'chromium', viewport: { width: 1440, height: 900 } } }],
   webServer: [
     { command: 'npx tsx scripts/local-services.ts', url: `${mailbox}/health`, reuseExistingServer: false, timeout: 60_000 },
+    { command: 'npx tsx --conditions=react-server scripts/worker.ts', url: `${workerHealth}/health`, reuseExistingServer: false, timeout: 60_000 },
     {
       command: `node node_modules/next/dist/bin/next start -p ${port}`,
       url: `http://localhost:${port}/api/health`,

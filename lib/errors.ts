@@ -20,13 +20,16 @@ export class AppError extends Error {
   readonly surface: string;
   /** The input field at fault, when there is one. */
   readonly field?: string;
+  /** Every problem found when the message can name only the first (a rules text's errors by line and column). */
+  readonly errors?: ReadonlyArray<ErrorDetail>;
 
-  constructor(type: ErrorType, surface: string, message: string, field?: string) {
+  constructor(type: ErrorType, surface: string, message: string, field?: string, errors?: ReadonlyArray<ErrorDetail>) {
     super(message);
     this.name = 'AppError';
     this.type = type;
     this.surface = surface;
     this.field = field;
+    this.errors = errors;
   }
 
   get code(): string {
@@ -38,10 +41,16 @@ export class AppError extends Error {
   }
 }
 
+export interface ErrorDetail {
+  line: number;
+  column: number;
+  message: string;
+}
+
 export interface ErrorBody {
-  error: { code: string; message: string; field?: string };
+  error: { code: string; message: string; field?: string; errors?: ReadonlyArray<ErrorDetail> };
 }
 
 export function errorBody(error: AppError): ErrorBody {
-  return { error: { code: error.code, message: error.message, ...(error.field ? { field: error.field } : {}) } };
+  return { error: { code: error.code, message: error.message, ...(error.field ? { field: error.field } : {}), ...(error.errors ? { errors: error.errors } : {}) } };
 }

@@ -1,14 +1,17 @@
 import type { Sequelize } from 'sequelize';
 import { AuditEvent } from './audit-event';
 import { Circuit } from './circuit';
+import { CircuitRules } from './circuit-rules';
 import { CircuitRevision } from './circuit-revision';
 import { Comment } from './comment';
 import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { PasswordResetToken } from './password-reset-token';
+import { Proof } from './proof';
 import { ReviewRequest } from './review-request';
 import { ReviewRequestReviewer } from './review-request-reviewer';
 import { Run } from './run';
+import { Scenario } from './scenario';
 import { Upload } from './upload';
 import { User } from './user';
 import { Workspace } from './workspace';
@@ -17,6 +20,8 @@ export { AuditEvent, Circuit, CircuitRevision, Comment, Invitation, Membership, 
 export { ROLES, type Role } from './roles';
 export { ReviewRequest, ReviewRequestReviewer };
 export { REVIEW_STATES, type ReviewState } from './review-request';
+export { CircuitRules, Proof, Scenario };
+export { PROOF_STATUSES, type ProofStatus } from './proof';
 
 let initialised: Sequelize | undefined;
 
@@ -24,7 +29,7 @@ let initialised: Sequelize | undefined;
 export function initModels(sequelize: Sequelize): void {
   if (initialised === sequelize) return;
   initialised = sequelize;
-  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer]) {
+  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer, CircuitRules, Scenario, Proof]) {
     model.initModel(sequelize);
   }
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
@@ -52,4 +57,8 @@ export function initModels(sequelize: Sequelize): void {
   ReviewRequest.belongsTo(User, { foreignKey: 'requestedById', as: 'requestedBy' });
   ReviewRequest.belongsTo(User, { foreignKey: 'decidedById', as: 'decidedBy' });
   ReviewRequestReviewer.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
+  Scenario.belongsTo(Circuit, { foreignKey: 'circuitId', as: 'circuit' });
+  Proof.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
+  Proof.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Proof.hasMany(Run, { foreignKey: 'proofId', as: 'counterexampleRuns' });
 }

@@ -15,6 +15,8 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare summary: unknown;
   declare traceKey: string | null;
   declare createdById: string;
+  /** The proof whose counterexample this run replays; null for every other kind. */
+  declare proofId: CreationOptional<string | null>;
   declare finishedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -31,6 +33,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         summary: { type: DataTypes.JSONB, allowNull: true },
         traceKey: { type: DataTypes.TEXT, allowNull: true },
         createdById: { type: DataTypes.UUID, allowNull: false },
+        proofId: { type: DataTypes.UUID, allowNull: true },
         finishedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -19,3 +19,5 @@ export S3_REGION="${S3_REGION:-us-east-1}"
 export AWS_ACCESS_KEY_ID="${AWS_ACCESS_KEY_ID:-S3RVER}"
 export AWS_SECRET_ACCESS_KEY="${AWS_SECRET_ACCESS_KEY:-S3RVER}"
 export LOCAL_SERVICES_DIR="${LOCAL_SERVICES_DIR:-$datadir}"
+# The proof worker (scripts/worker.ts) answers GET /health here, so scripts can wait for it.
+export WORKER_HEALTH_URL="${WORKER_HEALTH_URL:-http://127.0.0.1:$((4590 + base * 100))}"

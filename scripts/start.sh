@@ -34,6 +34,11 @@ npx tsx scripts/local-services.ts &
 CHILDREN+=($!)
 node scripts/wait-for.mjs "$MAILBOX_URL/health" "$S3_ENDPOINT" 
 
+log "starting the proof worker"
+npx tsx --conditions=react-server scripts/worker.ts &
+CHILDREN+=($!)
+node scripts/wait-for.mjs "$WORKER_HEALTH_URL/health"
+
 log "serving on http://localhost:$PORT"
 node node_modules/next/dist/bin/next start -p "$PORT" &
 CHILDREN+=($!)

@@ -22,6 +22,11 @@ export const PERMISSIONS = {
   /** Decide or withdraw any review request of the workspace, named on it or not. */
   'review:manage': ['owner'],
   'upload:create': ['owner', 'engineer', 'technician'],
+  /** Rules and scenarios are read under 'circuit:read'. */
+  'rules:edit': ['owner', 'engineer'],
+  'scenario:edit': ['owner', 'engineer'],
+  /** Start and cancel proofs; running a scenario is 'circuit:run'. */
+  'proof:run': ['owner', 'engineer', 'reviewer'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof PERMISSIONS;

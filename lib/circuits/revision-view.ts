@@ -1,10 +1,29 @@
 import 'server-only';
-import type { Transaction } from 'sequelize';
+import type { Includeable, Transaction } from 'sequelize';
 import { validateDocument } from '@/engine/document/validate';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { AppError } from '@/lib/errors';
 import { personOf, type Person } from '@/lib/person';
 import { Circuit, CircuitRevision, User } from '@/models';
+
+/**
+ * Includes for a row that belongs to a revision (a run, a proof): the revision with its number,
+ * found only through a circuit of the workspace, and who made the row. `required` makes the
+ * workspace condition on the nested circuit filter the row; without it the row would be found
+ * through an outer join.
+ */
+export function revisionInWorkspaceIncludes(workspaceId: string): Includeable[] {
+  return [
+    {
+      model: CircuitRevision,
+      as: 'revision',
+      attributes: ['id', 'number', 'circuitId'],
+      required: true,
+      include: [{ model: Circuit, as: 'circuit', attributes: [], where: { workspaceId } }],
+    },
+    { model: User, as: 'createdBy', attributes: ['id', 'name'] },
+  ];
+}
 
 export interface RevisionSummary {
   id: string;

@@ -1,11 +1,12 @@
 import 'server-only';
 import type { InputEvent } from '@/engine/solver/simulate';
+import { revisionInWorkspaceIncludes } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
 import { personOf, type Person } from '@/lib/person';
 import type { RunSummary } from '@/lib/runs/simulate-saved-run';
 import { getObject } from '@/lib/storage/object-store';
-import { Circuit, CircuitRevision, Run, User } from '@/models';
+import { CircuitRevision, Run, User } from '@/models';
 
 export interface RunDetail {
   id: string;
@@ -25,17 +26,7 @@ async function findRun({ workspaceId, runId }: { workspaceId: string; runId: str
   getSequelize();
   const run = (await Run.findOne({
     where: { id: runId },
-    include: [
-      {
-        model: CircuitRevision,
-        as: 'revision',
-        attributes: ['id', 'number', 'circuitId'],
-        // The workspace condition sits on the nested circuit; without this the run would be found through an outer join.
-        required: true,
-        include: [{ model: Circuit, as: 'circuit', attributes: [], where: { workspaceId } }],
-      },
-      { model: User, as: 'createdBy', attributes: ['id', 'name'] },
-    ],
+    include: revisionInWorkspaceIncludes(workspaceId),
   })) as RunWithRevision | null;
   if (!run) throw new AppError('not_found', 'run', 'No such run in this workspace');
   return run;

@@ -2,6 +2,7 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { promisify } from 'node:util';
 import { gzip } from 'node:zlib';
+import type { Trace } from '@/engine/trace/trace';
 import type { Actor } from '@/lib/auth/actor';
 import { documentOf, findCircuit, findRevision } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
@@ -18,6 +19,17 @@ function traceKeyOf(runId: string): string {
 }
 
 /**
+ * Stores a run's trace gzipped and returns its key. Call it before writing the run row, outside
+ * any transaction: storage refusing it then leaves no run, and no database connection waits on
+ * the upload. A row that then fails to insert leaves an object no run points at, which costs only space.
+ */
+export async function storeRunTrace({ runId, trace }: { runId: string; trace: Trace }): Promise<string> {
+  const body = await gzipAsync(JSON.stringify(trace));
+  await putObject({ key: traceKeyOf(runId), body, contentType: 'application/gzip' });
+  return traceKeyOf(runId);
+}
+
+/**
  * Saves a live run: simulates the revision again with the inputs as they were applied (the engine
  * is deterministic, so this gives the rows the person watched), stores the trace, and records the run.
  */
@@ -26,12 +38,8 @@ export async function saveRun({ actor, circuitId, input }: { actor: Actor; circu
   await findCircuit({ workspaceId: actor.workspaceId, circuitId });
   const revision = await findRevision({ circuitId, number: input.revisionNumber, field: 'revisionNumber' });
   const { trace, summary } = simulateSavedRun({ document: documentOf(revision, 'revisionNumber'), inputs: input.inputs, untilS: input.untilS });
-  const body = await gzipAsync(JSON.stringify(trace));
   const id = randomUUID();
-  // The trace first, outside any transaction: storage refusing it leaves no run row, and no
-  // database connection waits on the upload. A row that then fails to insert leaves an object
-  // no run points at, which costs only space.
-  await putObject({ key: traceKeyOf(id), body, contentType: 'application/gzip' });
+  const traceKey = await storeRunTrace({ runId: id, trace });
   await Run.create({
     id,
     revisionId: revision.id,
@@ -40,7 +48,7 @@ export async function saveRun({ actor, circuitId, input }: { actor: Actor; circu
     status: 'succeeded',
     inputs: input.inputs,
     summary,
-    traceKey: traceKeyOf(id),
+    traceKey,
     createdById: actor.userId,
     finishedAt: new Date(),
   });

@@ -34,10 +34,19 @@ import * as commentReopen from '@/app/api/comments/[id]/reopen/route';
 import * as commentResolve from '@/app/api/comments/[id]/resolve/route';
 import * as runOne from '@/app/api/runs/[id]/route';
 import * as runTrace from '@/app/api/runs/[id]/trace/route';
+import * as circuitRules from '@/app/api/circuits/[id]/rules/route';
+import * as circuitScenarios from '@/app/api/circuits/[id]/scenarios/route';
+import * as scenarioSuite from '@/app/api/circuits/[id]/scenarios/run/route';
+import * as scenarioOne from '@/app/api/scenarios/[id]/route';
+import * as scenarioRun from '@/app/api/scenarios/[id]/run/route';
+import * as circuitProofs from '@/app/api/circuits/[id]/proofs/route';
+import * as proofOne from '@/app/api/proofs/[id]/route';
+import * as proofCancel from '@/app/api/proofs/[id]/cancel/route';
 import { newToken } from '@/lib/auth/tokens';
 import { createCircuit } from '@/lib/circuits/create-circuit';
 import { saveRun } from '@/lib/runs/save-run';
-import { Circuit, Comment, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer } from '@/models';
+import { Circuit, Comment, Invitation, PasswordResetToken, Proof, ReviewRequest, ReviewRequestReviewer, Scenario } from '@/models';
+import { lidPress } from '../call-route';
 import { apiRequest, createTestWorkspace, type TestWorkspace } from '../fixtures';
 
 /**
@@ -63,6 +72,12 @@ interface World {
   resolvedCommentId: string;
   /** A saved run of revision 1. */
   runId: string;
+  /** A scenario of the circuit at its first save. */
+  scenarioId: string;
+  /** The demo lid press, whose hand valves a proof can vary. */
+  proofCircuitId: string;
+  /** A queued proof of the lid press that no worker takes. */
+  proofId: string;
 }
 
 type Handler = (request: NextRequest, context: never) => Promise<Response>;
@@ -79,6 +94,9 @@ interface RouteCase {
 const row = (...s: [number, number, number, number, number, number, number]): Record<ActorKind, number> =>
   Object.fromEntries(ACTORS.map((a, i) => [a, s[i]])) as Record<ActorKind, number>;
 const fresh = () => `cell-${randomUUID().slice(0, 8)}@test.example`;
+
+/** A proof of the lid press small enough to start in every cell. */
+const CELL_PROOF = { revisionNumber: 1, rulesText: 'rule "stays in": never 1A1 is extending', variations: [{ tag: '1S1', kind: 'button' }], quantumS: 0.5, steps: 1, settleS: 0 };
 
 //                                 signed_out viewer tech reviewer engineer other_owner owner
 const TABLE: RouteCase[] = [
@@ -124,6 +142,18 @@ const TABLE: RouteCase[] = [
   { route: 'POST /api/circuits/[id]/runs', handler: circuitRuns.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/runs`, params: (w) => ({ id: w.circuitId }), body: () => ({ revisionNumber: 1, inputs: [], untilS: 1 }), expect: row(401, 403, 201, 201, 201, 404, 201) },
   { route: 'GET /api/runs/[id]', handler: runOne.GET as Handler, path: (w) => `/api/runs/${w.runId}`, params: (w) => ({ id: w.runId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
   { route: 'GET /api/runs/[id]/trace', handler: runTrace.GET as Handler, path: (w) => `/api/runs/${w.runId}/trace`, params: (w) => ({ id: w.runId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/rules', handler: circuitRules.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/rules`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'PUT /api/circuits/[id]/rules', handler: circuitRules.PUT as Handler, path: (w) => `/api/circuits/${w.circuitId}/rules`, params: (w) => ({ id: w.circuitId }), body: () => ({ text: '# none yet', revision: 0 }), expect: row(401, 403, 403, 403, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/scenarios', handler: circuitScenarios.GET as Handler, path: (w) => `/api/circuits/${w.circuitId}/scenarios`, params: (w) => ({ id: w.circuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/scenarios', handler: circuitScenarios.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/scenarios`, params: (w) => ({ id: w.circuitId }), body: () => ({ name: 'Table cell', inputs: [], untilS: 1, expectations: '' }), expect: row(401, 403, 403, 403, 201, 404, 201) },
+  { route: 'POST /api/circuits/[id]/scenarios/run', handler: scenarioSuite.POST as Handler, path: (w) => `/api/circuits/${w.circuitId}/scenarios/run`, params: (w) => ({ id: w.circuitId }), expect: row(401, 403, 200, 200, 200, 404, 200) },
+  { route: 'PATCH /api/scenarios/[id]', handler: scenarioOne.PATCH as Handler, path: (w) => `/api/scenarios/${w.scenarioId}`, params: (w) => ({ id: w.scenarioId }), body: () => ({ revision: 1, name: 'Table cell, renamed' }), expect: row(401, 403, 403, 403, 200, 404, 200) },
+  { route: 'DELETE /api/scenarios/[id]', handler: scenarioOne.DELETE as Handler, path: (w) => `/api/scenarios/${w.scenarioId}`, params: (w) => ({ id: w.scenarioId }), expect: row(401, 403, 403, 403, 200, 404, 200) },
+  { route: 'POST /api/scenarios/[id]/run', handler: scenarioRun.POST as Handler, path: (w) => `/api/scenarios/${w.scenarioId}/run`, params: (w) => ({ id: w.scenarioId }), expect: row(401, 403, 201, 201, 201, 404, 201) },
+  { route: 'GET /api/circuits/[id]/proofs', handler: circuitProofs.GET as Handler, path: (w) => `/api/circuits/${w.proofCircuitId}/proofs`, params: (w) => ({ id: w.proofCircuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/proofs', handler: circuitProofs.POST as Handler, path: (w) => `/api/circuits/${w.proofCircuitId}/proofs`, params: (w) => ({ id: w.proofCircuitId }), body: () => CELL_PROOF, expect: row(401, 403, 403, 202, 202, 404, 202) },
+  { route: 'GET /api/proofs/[id]', handler: proofOne.GET as Handler, path: (w) => `/api/proofs/${w.proofId}`, params: (w) => ({ id: w.proofId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/proofs/[id]/cancel', handler: proofCancel.POST as Handler, path: (w) => `/api/proofs/${w.proofId}/cancel`, params: (w) => ({ id: w.proofId }), expect: row(401, 403, 403, 200, 200, 404, 200) },
 ];
 
 /** Routes served by next-auth itself; they need Next's request scope, so e2e/auth-endpoints.spec.ts checks them. */
@@ -155,7 +185,26 @@ async function makeWorld(): Promise<World> {
     circuitId: circuit.id,
     input: { revisionNumber: 1, inputs: [], untilS: 1, name: null },
   });
-  return { ws, other, circuitId: circuit.id, circuitLockVersion, invitationId: inv.id, invitationToken: invitation.token, resetToken: reset.token, reviewId: review.id, commentId: comment.id, resolvedCommentId: resolved.id, runId: run.id };
+  const scenario = await Scenario.create({ circuitId: circuit.id, name: 'Cell scenario', inputs: [], untilS: 1, expectations: '', createdById: ws.users.engineer.id, updatedById: ws.users.engineer.id });
+  const press = await createCircuit({ workspaceId: ws.workspaceId, authorId: ws.users.engineer.id, input: { title: 'Proof target', description: '', message: '', document: lidPress().document } });
+  const { rulesText, variations, quantumS, steps, settleS } = CELL_PROOF;
+  const proof = await Proof.create({ revisionId: press.revision.id, rulesText, variations, quantumS, steps, settleS, createdById: ws.users.engineer.id, progress: null, result: null, error: null, startedAt: null, finishedAt: null });
+  return {
+    ws,
+    other,
+    circuitId: circuit.id,
+    circuitLockVersion,
+    invitationId: inv.id,
+    invitationToken: invitation.token,
+    resetToken: reset.token,
+    reviewId: review.id,
+    commentId: comment.id,
+    resolvedCommentId: resolved.id,
+    runId: run.id,
+    scenarioId: scenario.id,
+    proofCircuitId: press.id,
+    proofId: proof.id,
+  };
 }
 
 function userFor(kind: ActorKind, w: World): string | undefined {
