@@ -1,8 +1,7 @@
-import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import { EditorPage } from './pages/editor-page';
 import { SignInPage } from './pages/sign-in-page';
-import { DEMO_PASSWORD, demoUser } from './support/demo';
+import { copyOfDemo, DEMO_PASSWORD, demoUser } from './support/demo';
 import { waitForMail, type CaughtMail } from './support/mailbox';
 
 /** The link to a comparison that a review-request mail carries. */
@@ -10,19 +9,6 @@ function compareLinkIn(mail: CaughtMail): string {
   const match = /https?:\/\/\S+\/circuits\/[0-9a-f-]+\/compare\?\S+/.exec(mail.text);
   if (!match) throw new Error(`no comparison link in mail "${mail.subject}"`);
   return match[0];
-}
-
-/** A copy of the two-hand demo circuit, made through the API as an import would; returns its id. */
-async function copyOfTwoHandDemo(page: Page, title: string): Promise<string> {
-  const demoDocument: unknown = JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.json', 'utf8'));
-  const created = await page.evaluate(
-    async ({ title, document }) => {
-      const response = await fetch('/api/circuits', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ title, document }) });
-      return (await response.json()) as { id: string };
-    },
-    { title, document: demoDocument },
-  );
-  return created.id;
 }
 
 async function signIn(page: Page, role: 'engineer' | 'reviewer', path: string) {
@@ -42,7 +28,7 @@ test('an engineer asks for a review, the reviewer asks for changes on the drawin
   await signIn(engineer, 'engineer', '/circuits');
   await expect(engineer.getByTestId('circuit-table')).toBeVisible();
   const title = `Lid press for review ${Date.now()}`;
-  const circuitId = await copyOfTwoHandDemo(engineer, title);
+  const circuitId = await copyOfDemo(engineer, 'lid-press-two-hand', title);
   const editor = new EditorPage(engineer);
   await engineer.goto(`/circuits/${circuitId}`);
   await expect(editor.editor()).toBeVisible();
@@ -139,7 +125,7 @@ test('a run saved in the editor replays on the review page, and a comment can be
   test.setTimeout(120_000);
   await signIn(page, 'engineer', '/circuits');
   await expect(page.getByTestId('circuit-table')).toBeVisible();
-  const circuitId = await copyOfTwoHandDemo(page, `Lid press run to replay ${Date.now()}`);
+  const circuitId = await copyOfDemo(page, 'lid-press-two-hand', `Lid press run to replay ${Date.now()}`);
   const editor = new EditorPage(page);
   await page.goto(`/circuits/${circuitId}`);
   await page.getByTestId('run-start').click();

@@ -52,7 +52,7 @@ export function requestJson<T>(url: string, signal?: AbortSignal): Promise<T> {
  * Sends a change to our API with an optional JSON body; errors as for requestJson.
  * Some changes answer with no body, which resolves to null, so such callers name `T` as `unknown`.
  */
-export function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', url: string, body?: unknown): Promise<T> {
+export function sendJson<T>(method: 'POST' | 'PUT' | 'PATCH' | 'DELETE', url: string, body?: unknown): Promise<T> {
   return fetchJson<T>(url, {
     method,
     headers:

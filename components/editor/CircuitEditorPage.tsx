@@ -59,6 +59,9 @@ export function CircuitEditorPage({ circuitId }: { circuitId: string }) {
           <TextLink href={`/circuits/${circuitId}/history`} className="text-xs" data-testid="history-link">
             Revisions and reviews
           </TextLink>
+          <TextLink href={`/circuits/${circuitId}/proofs`} className="text-xs" data-testid="proofs-link">
+            Rules and proofs
+          </TextLink>
         </div>
       }
       onReloadLatest={() => void queryClient.invalidateQueries({ queryKey: circuitKey(circuitId) })}

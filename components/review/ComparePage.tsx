@@ -116,7 +116,7 @@ export function ComparePage({
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div className="min-w-0">
           <p className="text-sm text-ink-soft">
-            <TextLink href={`/circuits/${circuitId}`}>{circuit.data?.title ?? 'Circuit'}</TextLink> · <TextLink href={`/circuits/${circuitId}/history`}>Revisions</TextLink>
+            <TextLink href={`/circuits/${circuitId}`}>{circuit.data?.title ?? 'Circuit'}</TextLink> · <TextLink href={`/circuits/${circuitId}/history`}>Revisions</TextLink> · <TextLink href={`/circuits/${circuitId}/proofs`}>Rules and proofs</TextLink>
           </p>
           <h1 className="text-xl" data-testid="compare-heading">
             {same ? `Revision ${to}` : `Revision ${to}, against ${from}`}

@@ -19,7 +19,10 @@ export function AppShell({ userName, children, width = 'page' }: AppShellProps) 
       >
         Skip to content
       </a>
-      <ShellHeader userName={userName} />
+      {/* A printed report needs no navigation. */}
+      <div className="print:hidden">
+        <ShellHeader userName={userName} />
+      </div>
       <main id="main" className={`mx-auto w-full flex-1 ${width === 'full' ? 'px-2 py-3 sm:px-4' : 'max-w-6xl px-4 py-6 sm:px-6 sm:py-8'}`}>
         {children}
       </main>
