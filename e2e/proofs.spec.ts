@@ -62,4 +62,7 @@ test('an engineer writes a two-hand rule, the timing search breaks it, and the c
   await expect(page.getByTestId('report-results')).toContainText('broken');
   await expect(page.getByTestId('report-counterexample')).toContainText('1S');
   await expect(page.getByTestId('report-caution')).toContainText('never replaces');
+  // The counterexample's sequence, as observed, goes into the report too.
+  await expect(page.getByTestId('report-counterexample').getByTestId('step-diagram')).toBeVisible();
+  await expect(page.getByTestId('report-counterexample').getByTestId('step-list-row').first()).toBeVisible();
 });

@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/Button';
 import { TextLink } from '@/components/ui/TextLink';
 import type { CircuitDetail } from '@/lib/circuits/get-circuit';
 import { fetchProof, isProofActive, proofKeys } from './proof-api';
+import { RunSequence } from './RunSequence';
 
 const KIND_WORDS: Record<string, string> = {
   button: 'pressed and let go at any step',
@@ -112,6 +113,7 @@ export function ProofReport({ circuitId, proofId }: { circuitId: string; proofId
                 <ol className="list-decimal pl-5 text-sm">
                   {r.counterexample!.inputs.length ? r.counterexample!.inputs.map((i, n) => <li key={n}>{`${i.t.toFixed(2)} s: ${i.component} ${i.action}${i.parameter ? ` ${i.parameter} = ${i.value}` : ''}`}</li>) : <li>no input</li>}
                 </ol>
+                {r.counterexample!.runId ? <RunSequence circuitId={circuitId} revisionNumber={p.revisionNumber} runId={r.counterexample!.runId} /> : null}
               </div>
             ))}
         </section>

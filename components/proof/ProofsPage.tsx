@@ -93,7 +93,7 @@ export function ProofsPage({ circuitId, proofId: initialProof }: { circuitId: st
                 onReplay={replay}
               />
             ) : null}
-            {tab === 'replay' && target ? <RunReplay key={target.runId} target={target} document={document} onFrame={setFrame} onClose={closeReplay} /> : null}
+            {tab === 'replay' && target ? <RunReplay key={target.runId} circuitId={circuitId} target={target} document={document} onFrame={setFrame} onClose={closeReplay} /> : null}
           </div>
         </aside>
       </div>

@@ -8,6 +8,7 @@ import { FormAlert } from '@/components/forms/FormAlert';
 import { fetchRunTrace, reviewKeys } from '@/components/review/review-api';
 import { runTraceOf } from '@/components/review/SavedRuns';
 import { Button } from '@/components/ui/Button';
+import { TextLink } from '@/components/ui/TextLink';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { checkRules, compileRulesText } from '@/engine/proof/rules';
 import { observedSequence } from '@/engine/proof/sequence';
@@ -21,7 +22,19 @@ import { StepList } from './StepList';
  * rule's moment marked, the rules checked on the run with the one in question highlighted, what
  * its parts were doing at the moment on show, the plots, and the sequence the run went through.
  */
-export function RunReplay({ target, document, onFrame, onClose }: { target: ReplayTarget; document: CircuitDocument; onFrame: (frame: RunFrame | null) => void; onClose: () => void }) {
+export function RunReplay({
+  circuitId,
+  target,
+  document,
+  onFrame,
+  onClose,
+}: {
+  circuitId: string;
+  target: ReplayTarget;
+  document: CircuitDocument;
+  onFrame: (frame: RunFrame | null) => void;
+  onClose: () => void;
+}) {
   const trace = useQuery({ queryKey: reviewKeys.trace(target.runId), queryFn: ({ signal }) => fetchRunTrace(target.runId, signal), staleTime: Infinity });
   const replay = useMemo(() => (trace.data ? runTraceOf(trace.data) : null), [trace.data]);
   const prepared = useMemo(() => (replay ? prepareRun(replay.names, document) : null), [document, replay]);
@@ -118,6 +131,9 @@ export function RunReplay({ target, document, onFrame, onClose }: { target: Repl
       {sequence ? (
         <details className="space-y-2" open>
           <summary className="cursor-pointer text-sm font-medium">Sequence of this run</summary>
+          <TextLink href={`/circuits/${circuitId}/proofs/sequence?run=${target.runId}`} className="text-xs" data-testid="replay-sequence-print">
+            Open it to print
+          </TextLink>
           <DisplacementStepDiagram sequence={sequence} />
           <StepList sequence={sequence} />
         </details>
