@@ -1,4 +1,4 @@
-import { cylinderParameters } from './cylinder-parameters';
+import { cylinderParameters, pistonSealLeakParam, rodSealLeakParam, sealLeak } from './cylinder-parameters';
 import type { BuildContext, ComponentType, NodeRef, RestrictionRef } from './types';
 
 /**
@@ -23,6 +23,8 @@ export const cylinderDoubleActing: ComponentType = {
     throughRod: { kind: 'flag', label: 'Through rod (rod on both ends)', default: false },
     cushionLength: { kind: 'number', quantity: 'length', label: 'Cushion length (0 = none)', default: 0, min: 0, max: 0.1 },
     cushionConductance: { kind: 'number', quantity: 'conductance', label: 'Cushion needle C', default: 5e-10, min: 1e-12, max: 1e-7 },
+    pistonSealLeak: pistonSealLeakParam,
+    rodSealLeak: rodSealLeakParam,
   },
   states: ['retracted', 'moving', 'extended'],
   build(ctx) {
@@ -56,6 +58,8 @@ export const cylinderDoubleActing: ComponentType = {
       polytropicExponent: ctx.num('polytropicExponent'),
       startPositionM: Math.min(ctx.num('startPosition'), stroke),
     });
+    sealLeak(ctx, 'pistonSealLeak', capChamber, rodChamber);
+    sealLeak(ctx, 'rodSealLeak', rodChamber, ctx.atmosphere());
     const cushion = ctx.num('cushionLength');
     if (cushion <= 0) return {};
     // Cushioning: needle and return check beside each main port passage.

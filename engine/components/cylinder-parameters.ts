@@ -1,4 +1,4 @@
-import type { ParameterSpec } from './types';
+import type { BuildContext, NodeRef, ParameterSpec } from './types';
 
 /**
  * Parameters every linear cylinder shares. Defaults describe a 32 mm bore,
@@ -28,3 +28,30 @@ export const cylinderParameters: Record<string, ParameterSpec> = {
     description: '1 = isothermal (slow strokes, good heat exchange); 1.4 = adiabatic (fast strokes); 1.2–1.3 is often used between.',
   },
 };
+
+/**
+ * A worn seal as a leak passage, ISO 6358 sonic conductance C; 0 (the default) means a sound
+ * seal and builds no passage at all, so a healthy cylinder runs exactly as before.
+ */
+const sealLeakParam = (label: string, description: string): ParameterSpec => ({
+  kind: 'number',
+  quantity: 'conductance',
+  label,
+  default: 0,
+  min: 0,
+  max: 1e-7,
+  description,
+});
+
+export const pistonSealLeakParam = sealLeakParam('Piston seal leak C (0 = sound)', 'Leak past the piston seal from one chamber to the other (to the vented side of a single-acting cylinder).');
+export const rodSealLeakParam = sealLeakParam('Rod seal leak C (0 = sound)', 'Leak past the rod seal from the rod-end chamber to atmosphere.');
+
+/**
+ * Builds a seal leak between two nodes when its parameter is above zero. A leak is a short,
+ * irregular gap rather than a sized orifice, so the critical ratio is taken as 0.5 (common practice
+ * for an unknown passage; the leak's conductance matters far more than its b).
+ */
+export function sealLeak(ctx: BuildContext, parameter: string, from: NodeRef, to: NodeRef): void {
+  const conductance = ctx.num(parameter);
+  if (conductance > 0) ctx.restriction({ name: parameter, from, to, conductance, criticalRatio: 0.5 });
+}

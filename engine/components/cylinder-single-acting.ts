@@ -1,4 +1,4 @@
-import { cylinderParameters } from './cylinder-parameters';
+import { cylinderParameters, pistonSealLeakParam, sealLeak } from './cylinder-parameters';
 import { withDefault } from './parameters';
 import type { ComponentType } from './types';
 
@@ -16,6 +16,7 @@ export const cylinderSingleActing: ComponentType = {
     stroke: withDefault(cylinderParameters.stroke!, 0.05),
     springPreload: { kind: 'number', quantity: 'force', label: 'Spring force, retracted', default: 20, min: 0, max: 10_000 },
     springRate: { kind: 'number', quantity: 'stiffness', label: 'Spring rate', default: 400, min: 0, max: 1_000_000 },
+    pistonSealLeak: pistonSealLeakParam,
   },
   states: ['retracted', 'moving', 'extended'],
   build(ctx) {
@@ -24,6 +25,8 @@ export const cylinderSingleActing: ComponentType = {
     const full = (Math.PI * bore * bore) / 4;
     const chamber = ctx.internalNode('cap-chamber', 0);
     ctx.restriction({ name: 'port-A', from: ctx.port('A'), to: chamber, conductance: ctx.num('portConductance'), criticalRatio: 0.3 });
+    // The spring side breathes to atmosphere, so air past the piston seal is lost.
+    sealLeak(ctx, 'pistonSealLeak', chamber, ctx.atmosphere());
     ctx.piston({
       name: 'piston',
       capNode: chamber,

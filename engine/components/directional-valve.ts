@@ -83,6 +83,12 @@ const valveParameters: Record<string, ParameterSpec> = {
   pilotThreshold: pilotThresholdParam,
   pilotHysteresis: pilotHysteresisParam,
   manualOverride: { kind: 'flag', label: 'Manual override on solenoid', default: true },
+  stuck: {
+    kind: 'flag',
+    label: 'Spool stuck in its rest position',
+    default: false,
+    description: 'A failure to look into: the spool ignores every actuation and stays where it rests.',
+  },
 };
 
 /** Builds a component type for a directional control valve from its ports and positions. */
@@ -127,6 +133,7 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
   const threshold = ctx.num('pilotThreshold');
   const hysteresis = ctx.num('pilotHysteresis');
   const manualOverride = ctx.flag('manualOverride');
+  const stuck = ctx.flag('stuck');
   const threePosition = def.positions.length === 3;
   // Side b is driven when the return is pilot or solenoid (double-acting valves), and always on 5/3;
   // a detented lever or selector is moved back by the same hand, so it works both sides.
@@ -192,6 +199,7 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
   };
 
   const reconsider = (api: RuntimeApi) => {
+    if (stuck) return;
     const next = target();
     if (next === current) {
       if (pendingTarget !== null) api.cancel('switch');
@@ -260,6 +268,7 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
       } else side.commanded = command.action === 'press';
       // A detented lever moved to one side leaves the other.
       if (isDetent(kind) && side.commanded) sides[1 - s]!.commanded = false;
+      if (stuck) api.event('input-ignored', 'spool stuck');
       reconsider(api);
     },
     signals() {

@@ -1,5 +1,14 @@
 import { hysteresisParam, stuckInput, terminals, windowParam, type StuckState } from './electrical-parameters';
-import type { ComponentType, RuntimeApi } from './types';
+import type { ComponentType, ParameterSpec, RuntimeApi } from './types';
+
+/** Set on a sensor suspected of having failed: its output no longer follows the piston. */
+const stuckAtParam: ParameterSpec = {
+  kind: 'choice',
+  label: 'Output stuck',
+  options: ['none', 'off', 'on'],
+  default: 'none',
+  description: 'A failure to look into: the output stays off (or on) whatever the piston does.',
+};
 
 /**
  * A switch actuated by a cylinder at a stroke position (an actuation link from the
@@ -7,7 +16,8 @@ import type { ComponentType, RuntimeApi } from './types';
  * that position, released once it is further than window + hysteresis away.
  * A mechanical limit switch has a changeover contact (11 common, 12 NC, 14 NO);
  * a three-wire sensor closes its output BK to its + lead BN while it detects.
- * A failure can be given as an input: `set` `stuck` 1 (stuck on), 0 (stuck off), -1 (working again).
+ * A failure can be given as an input: `set` `stuck` 1 (stuck on), 0 (stuck off), -1 (working again),
+ * or from the start by the `stuckAt` parameter (a failed sensor to look into).
  */
 export function positionSwitch(def: { id: string; label: string; description: string; kind: 'changeover' | 'sensor'; windowM: number; hysteresisM: number }): ComponentType {
   return {
@@ -17,7 +27,7 @@ export function positionSwitch(def: { id: string; label: string; description: st
     category: 'electrical',
     description: def.description,
     ports: def.kind === 'changeover' ? terminals('11', '12', '14') : [...terminals('BN', 'BK'), { id: 'BU', role: 'terminal', label: 'BU (0 V)' }],
-    parameters: { window: windowParam(def.windowM), hysteresis: hysteresisParam(def.hysteresisM) },
+    parameters: { window: windowParam(def.windowM), hysteresis: hysteresisParam(def.hysteresisM), stuckAt: stuckAtParam },
     states: ['released', 'actuated'],
     inputs: ['set'],
     build(ctx) {
@@ -31,7 +41,8 @@ export function positionSwitch(def: { id: string; label: string; description: st
           : [control.addContact(ctx.terminal('BN'), ctx.terminal('BK'), false, ctx.componentId)];
       // What the position calls for, kept apart from the output so that a stuck switch still tracks its hysteresis.
       let sensed = false;
-      let stuck: StuckState = null;
+      const stuckAt = ctx.choice('stuckAt');
+      let stuck: StuckState = stuckAt === 'none' ? null : stuckAt === 'on';
       let actuated = false;
       const reach = () => (sensed ? window + hysteresis : window);
       const apply = (api: RuntimeApi, now: boolean) => {

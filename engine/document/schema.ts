@@ -44,6 +44,12 @@ export const tubeSchema = z.object({
   lengthM: z.number().positive().max(1000),
   /** Inner diameter, m. */
   innerDiameterM: z.number().positive().max(0.2),
+  /**
+   * A leak to atmosphere somewhere along the tube (a cut, a loose fitting), ISO 6358 sonic
+   * conductance C in m³/(s·Pa); absent or 0 means tight. Left out rather than defaulted so that
+   * stored documents read back unchanged.
+   */
+  leakConductance: z.number().nonnegative().max(1e-6).optional(),
   bends: z.array(position).max(64).default([]),
 });
 

@@ -247,6 +247,14 @@ export function compile(document: CircuitDocument): CompileResult {
     behaviours.push({ componentId: component.id, tag: component.tag, behaviour: type.build(ctx) });
   }
 
+  // A tube's line is one node whatever its length, so a leak anywhere along it vents that node;
+  // b = 0.5 for an irregular gap (common practice: its C matters far more than its b).
+  for (const tube of document.tubes) {
+    const node = nodeOfRoot.get(uf.find(key(tube.from.component, tube.from.port)));
+    if (!tube.leakConductance || node === undefined || node === atmosphere) continue;
+    restrictions.push({ name: 'leak', owner: tube.id, from: node, to: atmosphere, conductance: tube.leakConductance, criticalRatio: 0.5, opening: 1 });
+  }
+
   const wireNets = document.wires.map((w) => ({ wireId: w.id, net: netOf(w.from.component, w.from.port) }));
   control.useNets(netOfRoot.size);
   for (const node of nodes) {

@@ -53,6 +53,20 @@ export function checkRule(rule: BoundRule, trace: Trace): RuleVerdict {
   return { ...base, holds: false, violatedAtS: trace.time[found.index]!, explanation: found.sentence };
 }
 
+/**
+ * Where a bound formula is known to hold, sample by sample (1 holds, 0 not or undecided): the
+ * replay turns `<tag> is <word>` into the series it compares with a recorded sensor. Null when
+ * the trace lacks a signal the formula reads.
+ */
+export function formulaSeries(formula: BoundFormula, trace: Trace): Uint8Array | null {
+  try {
+    return new Checker(trace).eval(formula).map((v) => (v === T ? 1 : 0));
+  } catch (e) {
+    if (e instanceof MissingSignal) return null;
+    throw e;
+  }
+}
+
 export function checkRules(rules: readonly BoundRule[], trace: Trace): RuleVerdict[] {
   return rules.map((rule) => checkRule(rule, trace));
 }

@@ -117,6 +117,7 @@ describe('the component form', () => {
         pilotThreshold: '2',
         pilotHysteresis: '0.5',
         manualOverride: true,
+        stuck: false,
       },
     });
   });
