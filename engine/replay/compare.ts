@@ -31,7 +31,7 @@ export interface SignalComparison {
   missing: number;
   /** Simulated edges within the log that the machine did not record. */
   extra: number;
-  /** Numbers only: RMS of simulated − recorded at the recorded times, SI (Pa or m). */
+  /** Numbers only: RMS of how far each recorded value lies outside what the model passed through within ±divergenceMs, SI (Pa or m). */
   rmsError?: number;
 }
 
@@ -79,8 +79,8 @@ const PA_PER_BAR = 100_000;
 
 /**
  * Compares the log's observations with a simulated trace: state signals edge by edge (paired in
- * order, same direction, nearest within the window), numbers sample by sample at the recorded
- * times. Throws a ReplayError naming the tag and word when an observation cannot be read from
+ * order, same direction, nearest within the window), numbers sample by sample against the band
+ * the model passed through around each recorded time. Throws a ReplayError naming the tag and word when an observation cannot be read from
  * the drawing.
  */
 export function compareRun(document: CircuitDocument, log: RecordedLog, trace: Trace, options: CompareOptions = {}): Comparison {
@@ -229,10 +229,10 @@ function compareNumber(document: CircuitDocument, trace: Trace, signal: Recorded
   let sum = 0;
   let count = 0;
   let worst: { t: number; diff: number } | null = null;
+  const windowS = o.divergenceMs / 1000;
   signal.times.forEach((t, i) => {
     if (t > end) return;
-    const simulated = 'constant' in column ? column.constant : interpolate(trace.time, column.values, t);
-    const diff = simulated - signal.values[i]!;
+    const diff = 'constant' in column ? column.constant - signal.values[i]! : offBand(trace.time, column.values, t, windowS, signal.values[i]!);
     sum += diff * diff;
     count += 1;
     if (worst === null && Math.abs(diff) > tolerance) worst = { t, diff };
@@ -264,6 +264,23 @@ function nearestIndex(time: readonly number[], t: number): number {
     else hi = mid;
   }
   return lo > 0 && Math.abs(time[lo - 1]! - t) <= Math.abs(time[lo]! - t) ? lo - 1 : lo;
+}
+
+/**
+ * How far a recorded value lies outside what the model passed through within ±window of its time
+ * (0 when inside), signed as model − recorded. Timestamps on a machine and in a model differ by a
+ * few ms, so a pressure rising through 3 bar in 20 ms would otherwise read as bars apart; the same
+ * window as for edges keeps a timing offset from counting twice, once as time and once as value.
+ */
+export function offBand(time: readonly number[], values: readonly number[], t: number, windowS: number, recorded: number): number {
+  let low = Math.min(interpolate(time, values, t - windowS), interpolate(time, values, t + windowS));
+  let high = Math.max(interpolate(time, values, t - windowS), interpolate(time, values, t + windowS));
+  for (let k = nearestIndex(time, t - windowS); k < time.length && time[k]! <= t + windowS; k += 1) {
+    if (time[k]! < t - windowS) continue;
+    low = Math.min(low, values[k]!);
+    high = Math.max(high, values[k]!);
+  }
+  return recorded < low ? low - recorded : recorded > high ? high - recorded : 0;
 }
 
 /** Linear interpolation in a sampled column; held constant beyond its ends. */

@@ -153,10 +153,15 @@ describe('compareRun on numbers', () => {
 
   it('passes a pressure within 0.3 bar and reports its RMS error in SI', () => {
     const c = compareRun(doc, log(cap((t) => (t < 1 ? 101_325 : 701_325) + 10_000)), model);
-    expect(c.signals[0]!.rmsError).toBeCloseTo(10_000, 6);
+    // Each recorded value is 0.1 bar above the model, except where the model's step at 1 s lies
+    // within ±50 ms of the sample: the model passed through 1.11 bar absolute there, so the samples
+    // at 0.96 s and 0.98 s are inside its band (those at 1.00…1.04 s, 7.11 bar, are above it).
+    // 149 of the 151 samples are 10 000 Pa off.
+    const rms = 10_000 * Math.sqrt(149 / 151);
+    expect(c.signals[0]!.rmsError).toBeCloseTo(rms, 6);
     expect(c.firstDivergence).toBeNull();
-    // An RMS error of 1/3 of the tolerance weighs as an edge 1/3 × 50 ms off.
-    expect(c.score).toBeCloseTo(50 / 3, 6);
+    // An RMS error of a fraction of the tolerance weighs as an edge that fraction × 50 ms off.
+    expect(c.score).toBeCloseTo((50 * rms) / 30_000, 6);
     expect(c.summary).toContain('pressure at 1A1.A within 0.10 bar RMS of the model');
   });
 
@@ -169,9 +174,21 @@ describe('compareRun on numbers', () => {
   it('reads positions in metres with a 2 mm tolerance', () => {
     const withX: Trace = { ...model, signals: [...model.signals, { name: 'press:x', unit: 'm', values: time.map((t) => Math.min(0.1, t * 0.05)) }] };
     const times = [0, 1, 2, 3];
-    const c = compareRun(doc, log({ tag: '1A1', word: 'position', role: 'observation', kind: 'number', times, values: [0, 0.051, 0.1, 0.1] }), withX);
-    expect(c.signals[0]!.rmsError).toBeCloseTo(0.0005, 9);
+    // Around 1 s the model moves through 47.5…52.5 mm within ±50 ms: 54 mm is 1.5 mm beyond that
+    // band, the other samples lie on the model; RMS over the four samples = 1.5 mm / 2.
+    const c = compareRun(doc, log({ tag: '1A1', word: 'position', role: 'observation', kind: 'number', times, values: [0, 0.054, 0.1, 0.1] }), withX);
+    expect(c.signals[0]!.rmsError).toBeCloseTo(0.00075, 9);
     expect(c.firstDivergence).toBeNull();
+  });
+
+  it('counts a value that the model reaches only a little earlier or later as on the model, not as a value error', () => {
+    // The machine logged the 6 bar step 30 ms after the model made it: inside the ±50 ms band.
+    const late = compareRun(doc, log(cap((t) => (t < 1.03 ? 101_325 : 701_325))), model);
+    expect(late.signals[0]!.rmsError).toBe(0);
+    expect(late.firstDivergence).toBeNull();
+    // 80 ms late is beyond it: at 1.06 s the logged 1 bar is the first sample whose ±50 ms holds only the model's 7 bar.
+    const later = compareRun(doc, log(cap((t) => (t < 1.08 ? 101_325 : 701_325))), model);
+    expect(later.firstDivergence!.t).toBeCloseTo(1.06, 9);
   });
 });
 
