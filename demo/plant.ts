@@ -1,3 +1,4 @@
+import type { ColumnMapping } from '@/lib/field-logs';
 import type { Role } from '@/models/roles';
 
 /**
@@ -47,5 +48,28 @@ export const DEMO_CIRCUITS: ReadonlyArray<{ file: string; title: string; descrip
     description:
       'S1 and S2 drive relays K1 and K2; either starts the 0.5 s window timer KT1. K3 picks up only through K1, K2 and the NC contact of KT1, so both hands within 0.5 s (ISO 13851 synchronous actuation), and holds itself while both stay pressed; a new stroke needs both released first. K3 drives solenoid 1M1 of the spring-return 5/2 valve.',
     author: 'engineer',
+  },
+];
+
+/**
+ * Field logs uploaded to the demo circuits, with the mapping saved for each (demo/logs). The lid
+ * press log was recorded with the meter-out flow control 1V2 closed too far, so the lid is slow down.
+ */
+export const DEMO_LOGS: ReadonlyArray<{ file: string; circuitTitle: string; uploader: Role; mappingName: string; mapping: ColumnMapping }> = [
+  {
+    file: 'lid-press-slow-close.csv',
+    circuitTitle: 'Lid press — relay control, 24 V DC',
+    uploader: 'technician',
+    mappingName: 'LP-2 data logger, channels 1–5',
+    mapping: {
+      time: { column: 'timestamp', format: 'iso8601' },
+      columns: [
+        { column: 'S1_start', tag: 'S1', word: 'pressed', role: 'command' },
+        { column: 'S2_stop', tag: '', word: '', role: 'ignore' },
+        { column: '1M1_valve', tag: '1M1', word: 'energised', role: 'observation' },
+        { column: '1B2_down', tag: '1B2', word: 'on', role: 'observation' },
+        { column: 'p_cap_bar', tag: '1A1', word: 'pressure:A', role: 'observation', unit: 'bar-gauge' },
+      ],
+    },
   },
 ];

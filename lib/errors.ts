@@ -8,6 +8,7 @@ export const ERROR_STATUS = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  too_large: 413,
   rate_limited: 429,
   unavailable: 503,
   internal: 500,
@@ -41,11 +42,8 @@ export class AppError extends Error {
   }
 }
 
-export interface ErrorDetail {
-  line: number;
-  column: number;
-  message: string;
-}
+/** A problem at a place in a text: a rules text's line and column, or a field log's row and column name. */
+export type ErrorDetail = { line: number; column: number; message: string } | { row: number; column: string | null; message: string };
 
 export interface ErrorBody {
   error: { code: string; message: string; field?: string; errors?: ReadonlyArray<ErrorDetail> };

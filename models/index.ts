@@ -4,7 +4,9 @@ import { Circuit } from './circuit';
 import { CircuitRules } from './circuit-rules';
 import { CircuitRevision } from './circuit-revision';
 import { Comment } from './comment';
+import { FaultSearch } from './fault-search';
 import { Invitation } from './invitation';
+import { LogMapping } from './log-mapping';
 import { Membership } from './membership';
 import { PasswordResetToken } from './password-reset-token';
 import { Proof } from './proof';
@@ -22,6 +24,8 @@ export { ReviewRequest, ReviewRequestReviewer };
 export { REVIEW_STATES, type ReviewState } from './review-request';
 export { CircuitRules, Proof, Scenario };
 export { PROOF_STATUSES, type ProofStatus } from './proof';
+export { FaultSearch, LogMapping };
+export { FAULT_SEARCH_STATUSES, type FaultSearchStatus } from './fault-search';
 
 let initialised: Sequelize | undefined;
 
@@ -29,7 +33,7 @@ let initialised: Sequelize | undefined;
 export function initModels(sequelize: Sequelize): void {
   if (initialised === sequelize) return;
   initialised = sequelize;
-  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer, CircuitRules, Scenario, Proof]) {
+  for (const model of [User, Workspace, Membership, Circuit, CircuitRevision, Comment, Run, Upload, AuditEvent, Invitation, PasswordResetToken, ReviewRequest, ReviewRequestReviewer, CircuitRules, Scenario, Proof, LogMapping, FaultSearch]) {
     model.initModel(sequelize);
   }
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
@@ -61,4 +65,9 @@ export function initModels(sequelize: Sequelize): void {
   Proof.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
   Proof.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
   Proof.hasMany(Run, { foreignKey: 'proofId', as: 'counterexampleRuns' });
+  Upload.belongsTo(Circuit, { foreignKey: 'circuitId', as: 'circuit' });
+  LogMapping.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
+  FaultSearch.belongsTo(Upload, { foreignKey: 'uploadId', as: 'upload' });
+  FaultSearch.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
+  FaultSearch.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
 }

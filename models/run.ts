@@ -17,6 +17,8 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare createdById: string;
   /** The proof whose counterexample this run replays; null for every other kind. */
   declare proofId: CreationOptional<string | null>;
+  /** The field log this run replays (kind 'replay'); null for every other kind. */
+  declare uploadId: CreationOptional<string | null>;
   declare finishedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -34,6 +36,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         traceKey: { type: DataTypes.TEXT, allowNull: true },
         createdById: { type: DataTypes.UUID, allowNull: false },
         proofId: { type: DataTypes.UUID, allowNull: true },
+        uploadId: { type: DataTypes.UUID, allowNull: true },
         finishedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -1,6 +1,7 @@
-// `npm run db:seed`: creates the demo workspace, one user per role and the demo
-// circuits. Idempotent: what exists already is left as it is, except that a demo
-// circuit whose file has changed gets a new revision with the file's document.
+// `npm run db:seed`: creates the demo workspace, one user per role, the demo
+// circuits and the demo field logs. Idempotent: what exists already is left as it is,
+// except that a demo circuit whose file has changed gets a new revision with the file's
+// document (and a changed demo log its new bytes and mapping).
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { isDeepStrictEqual } from 'node:util';
@@ -10,6 +11,7 @@ import { hashPassword } from '@/lib/auth/password';
 import { appendRevision } from '@/lib/circuits/append-revision';
 import { createCircuit } from '@/lib/circuits/create-circuit';
 import { closeSequelize, getSequelize } from '@/lib/db';
+import { seedDemoLogs } from '@/lib/uploads/seed-demo-logs';
 import { Circuit, CircuitRevision, Membership, User, Workspace } from '@/models';
 
 async function main(): Promise<void> {
@@ -56,7 +58,8 @@ async function main(): Promise<void> {
     });
     created += 1;
   }
-  console.log(`demo workspace "${workspace.name}": ${DEMO_USERS.length} users, ${created} circuits added, ${revised} updated`);
+  const logs = await seedDemoLogs({ workspaceId: workspace.id, userIdByRole });
+  console.log(`demo workspace "${workspace.name}": ${DEMO_USERS.length} users, ${created} circuits added, ${revised} updated, ${logs.added} field logs added, ${logs.updated} updated`);
 }
 
 main()

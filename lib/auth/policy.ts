@@ -27,6 +27,12 @@ export const PERMISSIONS = {
   'scenario:edit': ['owner', 'engineer'],
   /** Start and cancel proofs; running a scenario is 'circuit:run'. */
   'proof:run': ['owner', 'engineer', 'reviewer'],
+  /**
+   * Map a field log's columns, replay it and search for the faults behind it (start and cancel);
+   * logs, replays and searches are read under 'circuit:read'. Like 'circuit:run' it adds runs and
+   * never changes the drawing: the technician has the log, the reviewer checks the explanation.
+   */
+  'replay:run': ['owner', 'engineer', 'reviewer', 'technician'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof PERMISSIONS;

@@ -14,6 +14,16 @@ export interface ProofJob {
  */
 const PROOF_EXPIRE_S = 6 * 60 * 60;
 
+/** The queue of fault searches over a field log; a job's data names the fault_searches row. */
+export const FAULT_SEARCH_QUEUE = 'fault-search';
+
+export interface FaultSearchJob {
+  faultSearchId: string;
+}
+
+/** Longest a fault search may run before pg-boss counts its worker as gone; failed then, not retried. */
+const FAULT_SEARCH_EXPIRE_S = 2 * 60 * 60;
+
 const holder = globalThis as unknown as { airproofBoss?: Promise<PgBoss> };
 
 async function startBoss(): Promise<PgBoss> {
@@ -23,6 +33,7 @@ async function startBoss(): Promise<PgBoss> {
   await boss.start();
   // Queues must exist before jobs are sent to them (pg-boss 10); creating one again changes nothing.
   await boss.createQueue(PROOF_QUEUE, { name: PROOF_QUEUE, retryLimit: 0, expireInSeconds: PROOF_EXPIRE_S });
+  await boss.createQueue(FAULT_SEARCH_QUEUE, { name: FAULT_SEARCH_QUEUE, retryLimit: 0, expireInSeconds: FAULT_SEARCH_EXPIRE_S });
   return boss;
 }
 
@@ -42,6 +53,14 @@ export async function sendProofJob(job: ProofJob): Promise<string> {
   const id = await boss.send(PROOF_QUEUE, job);
   // Only singleton and throttled sends come back without an id; the proof queue uses neither.
   if (!id) throw new Error(`pg-boss did not accept the job for proof ${job.proofId}`);
+  return id;
+}
+
+/** Sends a fault search to the workers; the job id. */
+export async function sendFaultSearchJob(job: FaultSearchJob): Promise<string> {
+  const boss = await getBoss();
+  const id = await boss.send(FAULT_SEARCH_QUEUE, job);
+  if (!id) throw new Error(`pg-boss did not accept the job for fault search ${job.faultSearchId}`);
   return id;
 }
 

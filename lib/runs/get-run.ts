@@ -13,8 +13,11 @@ export interface RunDetail {
   revisionNumber: number;
   circuitId: string;
   name: string | null;
+  kind: Run['kind'];
   untilS: number;
   inputs: InputEvent[];
+  /** What the run's kind keeps beside the trace (a replay's comparison, a scenario's verdicts). */
+  summary: unknown;
   createdAt: string;
   createdBy: Person;
 }
@@ -43,8 +46,10 @@ export async function getRun({ workspaceId, runId }: { workspaceId: string; runI
     revisionNumber: run.revision.number,
     circuitId: run.revision.circuitId,
     name: run.name,
+    kind: run.kind,
     untilS: runUntilS(run),
     inputs: run.inputs as InputEvent[],
+    summary: run.summary,
     createdAt: run.createdAt.toISOString(),
     createdBy: personOf(run.createdBy),
   };

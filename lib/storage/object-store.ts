@@ -1,5 +1,5 @@
 import 'server-only';
-import { GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { serverEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 
@@ -44,6 +44,15 @@ export async function getObject(key: string): Promise<ReadableStream<Uint8Array<
   }
   if (!body) throw missing();
   return body.transformToWebStream();
+}
+
+/** Removes the object under `key`; removing one that is not there is not an error (S3 answers the same). */
+export async function deleteObject(key: string): Promise<void> {
+  try {
+    await s3().send(new DeleteObjectCommand({ Bucket: serverEnv().S3_BUCKET, Key: key }));
+  } catch (error) {
+    throw unavailable(error);
+  }
 }
 
 function missing(): AppError {

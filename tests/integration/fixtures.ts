@@ -39,7 +39,8 @@ export async function apiRequest(
 ): Promise<NextRequest> {
   const allHeaders: Record<string, string> = { ...headers };
   if (userId) allHeaders.cookie = [await sessionCookie(userId), headers.cookie].filter(Boolean).join('; ');
-  if (body !== undefined) allHeaders['content-type'] = 'application/json';
+  // A raw body (a field log) says its own type; an object is sent as JSON.
+  if (body !== undefined && !allHeaders['content-type']) allHeaders['content-type'] = 'application/json';
   return new NextRequest(new URL(path, 'http://localhost:3000'), {
     method,
     headers: allHeaders,

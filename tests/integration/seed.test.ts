@@ -1,19 +1,21 @@
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEMO_CIRCUITS, DEMO_USERS, DEMO_WORKSPACE } from '@/demo/plant';
+import { DEMO_CIRCUITS, DEMO_LOGS, DEMO_USERS, DEMO_WORKSPACE } from '@/demo/plant';
 import { getSequelize } from '@/lib/db';
 
 const tsx = path.join(process.cwd(), 'node_modules', '.bin', 'tsx');
 const seed = () => execFileSync(tsx, ['--conditions=react-server', 'scripts/db-seed.ts'], { encoding: 'utf8', env: process.env });
 
-async function demoCounts(): Promise<{ users: number; circuits: number; revisions: number }> {
+async function demoCounts(): Promise<{ users: number; circuits: number; revisions: number; logs: number; mappings: number }> {
   return (await getSequelize().query(
     `select (select count(*)::int from memberships m join workspaces w on w.id = m.workspace_id where w.slug = :slug) as users,
             (select count(*)::int from circuits c join workspaces w on w.id = c.workspace_id where w.slug = :slug) as circuits,
-            (select count(*)::int from circuit_revisions r join circuits c on c.id = r.circuit_id join workspaces w on w.id = c.workspace_id where w.slug = :slug) as revisions`,
+            (select count(*)::int from circuit_revisions r join circuits c on c.id = r.circuit_id join workspaces w on w.id = c.workspace_id where w.slug = :slug) as revisions,
+            (select count(*)::int from uploads u join workspaces w on w.id = u.workspace_id where w.slug = :slug) as logs,
+            (select count(*)::int from log_mappings m join uploads u on u.id = m.upload_id join workspaces w on w.id = u.workspace_id where w.slug = :slug) as mappings`,
     { plain: true, replacements: { slug: DEMO_WORKSPACE.slug } },
-  )) as { users: number; circuits: number; revisions: number };
+  )) as { users: number; circuits: number; revisions: number; logs: number; mappings: number };
 }
 
 describe('demo seed', () => {
@@ -23,7 +25,9 @@ describe('demo seed', () => {
     expect(first.users).toBe(DEMO_USERS.length);
     expect(first.circuits).toBe(DEMO_CIRCUITS.length);
     expect(first.revisions).toBeGreaterThanOrEqual(DEMO_CIRCUITS.length);
-    expect(seed()).toContain('0 circuits added, 0 updated');
+    expect(first.logs).toBe(DEMO_LOGS.length);
+    expect(first.mappings).toBe(DEMO_LOGS.length);
+    expect(seed()).toContain('0 circuits added, 0 updated, 0 field logs added, 0 updated');
     expect(await demoCounts()).toEqual(first);
   }, 60_000);
 });

@@ -42,11 +42,23 @@ import * as scenarioRun from '@/app/api/scenarios/[id]/run/route';
 import * as circuitProofs from '@/app/api/circuits/[id]/proofs/route';
 import * as proofOne from '@/app/api/proofs/[id]/route';
 import * as proofCancel from '@/app/api/proofs/[id]/cancel/route';
+import * as circuitLogs from '@/app/api/circuits/[id]/logs/route';
+import * as circuitLogMappings from '@/app/api/circuits/[id]/log-mappings/route';
+import * as logOne from '@/app/api/logs/[id]/route';
+import * as logFile from '@/app/api/logs/[id]/file/route';
+import * as logMapping from '@/app/api/logs/[id]/mapping/route';
+import * as logReplay from '@/app/api/logs/[id]/replay/route';
+import * as logReplays from '@/app/api/logs/[id]/replays/route';
+import * as logFaultSearches from '@/app/api/logs/[id]/fault-searches/route';
+import * as faultSearchOne from '@/app/api/fault-searches/[id]/route';
+import * as faultSearchCancel from '@/app/api/fault-searches/[id]/cancel/route';
 import { newToken } from '@/lib/auth/tokens';
 import { createCircuit } from '@/lib/circuits/create-circuit';
 import { saveRun } from '@/lib/runs/save-run';
-import { Circuit, Comment, Invitation, PasswordResetToken, Proof, ReviewRequest, ReviewRequestReviewer, Scenario } from '@/models';
+import { createLogUpload } from '@/lib/uploads/uploads';
+import { Circuit, Comment, FaultSearch, Invitation, LogMapping, PasswordResetToken, Proof, ReviewRequest, ReviewRequestReviewer, Scenario } from '@/models';
 import { lidPress } from '../call-route';
+import { createRelayPress, DEMO_LOG, demoLogBytes } from '../replays/helpers';
 import { apiRequest, createTestWorkspace, type TestWorkspace } from '../fixtures';
 
 /**
@@ -78,6 +90,11 @@ interface World {
   proofCircuitId: string;
   /** A queued proof of the lid press that no worker takes. */
   proofId: string;
+  /** The relay-control lid press, with the demo log the technician uploaded and mapped. */
+  logCircuitId: string;
+  logId: string;
+  /** A queued fault search of that log that no worker takes. */
+  faultSearchId: string;
 }
 
 type Handler = (request: NextRequest, context: never) => Promise<Response>;
@@ -87,6 +104,8 @@ interface RouteCase {
   handler: Handler;
   path: (w: World) => string;
   body?: (w: World) => object;
+  /** A raw body with its own headers (a field log), instead of JSON. */
+  raw?: { body: string; headers: Record<string, string> };
   params?: (w: World) => Record<string, string>;
   expect: Record<ActorKind, number>;
 }
@@ -153,6 +172,20 @@ const TABLE: RouteCase[] = [
   { route: 'GET /api/circuits/[id]/proofs', handler: circuitProofs.GET as Handler, path: (w) => `/api/circuits/${w.proofCircuitId}/proofs`, params: (w) => ({ id: w.proofCircuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
   { route: 'POST /api/circuits/[id]/proofs', handler: circuitProofs.POST as Handler, path: (w) => `/api/circuits/${w.proofCircuitId}/proofs`, params: (w) => ({ id: w.proofCircuitId }), body: () => CELL_PROOF, expect: row(401, 403, 403, 202, 202, 404, 202) },
   { route: 'GET /api/proofs/[id]', handler: proofOne.GET as Handler, path: (w) => `/api/proofs/${w.proofId}`, params: (w) => ({ id: w.proofId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/circuits/[id]/logs', handler: circuitLogs.GET as Handler, path: (w) => `/api/circuits/${w.logCircuitId}/logs`, params: (w) => ({ id: w.logCircuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/circuits/[id]/logs', handler: circuitLogs.POST as Handler, path: (w) => `/api/circuits/${w.logCircuitId}/logs?name=cell.csv`, params: (w) => ({ id: w.logCircuitId }), raw: { body: 't;S1\n0;0\n', headers: { 'content-type': 'text/csv' } }, expect: row(401, 403, 201, 403, 201, 404, 201) },
+  { route: 'GET /api/circuits/[id]/log-mappings', handler: circuitLogMappings.GET as Handler, path: (w) => `/api/circuits/${w.logCircuitId}/log-mappings`, params: (w) => ({ id: w.logCircuitId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/logs/[id]', handler: logOne.GET as Handler, path: (w) => `/api/logs/${w.logId}`, params: (w) => ({ id: w.logId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  // The technician uploaded it: its uploader and owners delete a log, not another engineer.
+  { route: 'DELETE /api/logs/[id]', handler: logOne.DELETE as Handler, path: (w) => `/api/logs/${w.logId}`, params: (w) => ({ id: w.logId }), expect: row(401, 403, 200, 403, 403, 404, 200) },
+  { route: 'GET /api/logs/[id]/file', handler: logFile.GET as Handler, path: (w) => `/api/logs/${w.logId}/file`, params: (w) => ({ id: w.logId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'PUT /api/logs/[id]/mapping', handler: logMapping.PUT as Handler, path: (w) => `/api/logs/${w.logId}/mapping`, params: (w) => ({ id: w.logId }), body: () => ({ name: 'Table cell', mapping: DEMO_LOG.mapping, revision: 1 }), expect: row(401, 403, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/logs/[id]/replay', handler: logReplay.POST as Handler, path: (w) => `/api/logs/${w.logId}/replay`, params: (w) => ({ id: w.logId }), expect: row(401, 403, 201, 201, 201, 404, 201) },
+  { route: 'GET /api/logs/[id]/replays', handler: logReplays.GET as Handler, path: (w) => `/api/logs/${w.logId}/replays`, params: (w) => ({ id: w.logId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'GET /api/logs/[id]/fault-searches', handler: logFaultSearches.GET as Handler, path: (w) => `/api/logs/${w.logId}/fault-searches`, params: (w) => ({ id: w.logId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/logs/[id]/fault-searches', handler: logFaultSearches.POST as Handler, path: (w) => `/api/logs/${w.logId}/fault-searches`, params: (w) => ({ id: w.logId }), expect: row(401, 403, 202, 202, 202, 404, 202) },
+  { route: 'GET /api/fault-searches/[id]', handler: faultSearchOne.GET as Handler, path: (w) => `/api/fault-searches/${w.faultSearchId}`, params: (w) => ({ id: w.faultSearchId }), expect: row(401, 200, 200, 200, 200, 404, 200) },
+  { route: 'POST /api/fault-searches/[id]/cancel', handler: faultSearchCancel.POST as Handler, path: (w) => `/api/fault-searches/${w.faultSearchId}/cancel`, params: (w) => ({ id: w.faultSearchId }), expect: row(401, 403, 200, 200, 200, 404, 200) },
   { route: 'POST /api/proofs/[id]/cancel', handler: proofCancel.POST as Handler, path: (w) => `/api/proofs/${w.proofId}/cancel`, params: (w) => ({ id: w.proofId }), expect: row(401, 403, 403, 200, 200, 404, 200) },
 ];
 
@@ -189,6 +222,17 @@ async function makeWorld(): Promise<World> {
   const press = await createCircuit({ workspaceId: ws.workspaceId, authorId: ws.users.engineer.id, input: { title: 'Proof target', description: '', message: '', document: lidPress().document } });
   const { rulesText, variations, quantumS, steps, settleS } = CELL_PROOF;
   const proof = await Proof.create({ revisionId: press.revision.id, rulesText, variations, quantumS, steps, settleS, createdById: ws.users.engineer.id, progress: null, result: null, error: null, startedAt: null, finishedAt: null });
+  const logCircuitId = await createRelayPress(ws, 'Log target');
+  const technician = { userId: ws.users.technician.id, workspaceId: ws.workspaceId, workspaceName: '', role: 'technician' as const };
+  const log = await createLogUpload({
+    actor: technician,
+    circuitId: logCircuitId,
+    fileName: DEMO_LOG.file,
+    request: new Request('http://localhost/upload', { method: 'POST', headers: { 'content-type': 'text/csv' }, body: new Uint8Array(demoLogBytes()) }),
+  });
+  await LogMapping.create({ circuitId: logCircuitId, uploadId: log.id, name: 'Cell mapping', mapping: DEMO_LOG.mapping, columnsSignature: '0'.repeat(64), updatedById: ws.users.technician.id });
+  const logRevision = await Circuit.findByPk(logCircuitId, { rejectOnEmpty: true });
+  const faultSearch = await FaultSearch.create({ uploadId: log.id, revisionId: logRevision.currentRevisionId!, mapping: DEMO_LOG.mapping, createdById: ws.users.technician.id, progress: null, result: null, error: null, startedAt: null, finishedAt: null });
   return {
     ws,
     other,
@@ -204,6 +248,9 @@ async function makeWorld(): Promise<World> {
     scenarioId: scenario.id,
     proofCircuitId: press.id,
     proofId: proof.id,
+    logCircuitId,
+    logId: log.id,
+    faultSearchId: faultSearch.id,
   };
 }
 
@@ -242,7 +289,7 @@ describe('role-permission table', () => {
         });
         it(`${kind} → ${routeCase.expect[kind]}`, async () => {
           const [method] = routeCase.route.split(' ');
-          const request = await apiRequest(routeCase.path(world), { userId: userFor(kind, world), method, body: routeCase.body?.(world) });
+          const request = await apiRequest(routeCase.path(world), { userId: userFor(kind, world), method, body: routeCase.raw?.body ?? routeCase.body?.(world), headers: routeCase.raw?.headers });
           const context = { params: Promise.resolve(routeCase.params?.(world) ?? {}) } as never;
           const response = await routeCase.handler(request, context);
           const text = await response.text();

@@ -43,7 +43,7 @@ describe('saved runs', () => {
     const detail = await callRoute(runOne.GET, `/api/runs/${id}`, { userId: ws.users.viewer.id, id });
     expect(detail).toEqual({
       status: 200,
-      json: { id, revisionNumber: 1, circuitId, name: 'Both hands, late release', untilS: 3, inputs, createdAt: row.createdAt.toISOString(), createdBy: { id: technician.id, name: technician.name } },
+      json: { id, revisionNumber: 1, circuitId, name: 'Both hands, late release', kind: 'live', untilS: 3, inputs, summary: row.summary, createdAt: row.createdAt.toISOString(), createdBy: { id: technician.id, name: technician.name } },
     });
 
     const read = await callRoute<Trace>(runTrace.GET, `/api/runs/${id}/trace`, { userId: ws.users.viewer.id, id });

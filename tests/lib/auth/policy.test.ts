@@ -5,9 +5,9 @@ import { ROLES, type Role } from '@/models/roles';
 // The role table of DESIGN.md, written out independently of the policy module.
 const EXPECTED: Record<Role, Action[]> = {
   owner: Object.keys(PERMISSIONS) as Action[],
-  engineer: ['workspace:read', 'member:read', 'circuit:read', 'circuit:create', 'circuit:edit', 'circuit:run', 'comment:create', 'review:request', 'upload:create', 'rules:edit', 'scenario:edit', 'proof:run'],
-  reviewer: ['workspace:read', 'member:read', 'circuit:read', 'circuit:run', 'comment:create', 'review:decide', 'proof:run'],
-  technician: ['workspace:read', 'member:read', 'circuit:read', 'circuit:run', 'comment:create', 'upload:create'],
+  engineer: ['workspace:read', 'member:read', 'circuit:read', 'circuit:create', 'circuit:edit', 'circuit:run', 'comment:create', 'review:request', 'upload:create', 'rules:edit', 'scenario:edit', 'proof:run', 'replay:run'],
+  reviewer: ['workspace:read', 'member:read', 'circuit:read', 'circuit:run', 'comment:create', 'review:decide', 'proof:run', 'replay:run'],
+  technician: ['workspace:read', 'member:read', 'circuit:read', 'circuit:run', 'comment:create', 'upload:create', 'replay:run'],
   viewer: ['workspace:read', 'member:read', 'circuit:read'],
 };
 

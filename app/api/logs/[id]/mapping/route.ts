@@ -1,0 +1,16 @@
+import { NextResponse, type NextRequest } from 'next/server';
+import { authorizeRequest } from '@/lib/auth/actor';
+import { parseWith, readJsonBody } from '@/lib/http/parse';
+import { route } from '@/lib/http/respond';
+import { putLogMapping, putMappingBodySchema } from '@/lib/replays/mappings';
+import { logIdSchema } from '@/lib/uploads/schemas';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+export const PUT = route(async (request: NextRequest, { params }: { params: Promise<{ id: string }> }) => {
+  const actor = await authorizeRequest(request, 'replay:run');
+  const uploadId = parseWith(logIdSchema, (await params).id, 'id');
+  const input = await readJsonBody(request, putMappingBodySchema);
+  return NextResponse.json(await putLogMapping({ actor, uploadId, input }));
+});
