@@ -17,6 +17,7 @@ import {
 import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent, type ReactNode } from 'react';
 import { useStore } from 'zustand';
 import type { CircuitDocument } from '@/engine/document/schema';
+import { applyFaults, type FaultSpec } from '@/engine/faults';
 import type { Diagnostic } from '@/engine/solver/model';
 import { GRID, symbolGeometry } from '@/components/symbols/geometry';
 import { saveRun } from '@/components/review/review-api';
@@ -25,6 +26,7 @@ import { ChecksPanel } from './ChecksPanel';
 import { PressureLegend } from './run/PressureLegend';
 import { rampTopBar } from './run/pressure-ramp';
 import { edgeInRun } from './run/run-edges';
+import { FaultPanel } from './run/FaultPanel';
 import { RunBar } from './run/RunBar';
 import { RunContext, type RunView } from './run/run-context';
 import { TracePlot } from './run/TracePlot';
@@ -114,6 +116,8 @@ function EditorFrame({
   const [hovered, setHovered] = useState<string | null>(null);
   // The plot takes room from the drawing, so it opens on request.
   const [plotOpen, setPlotOpen] = useState(false);
+  const [faults, setFaults] = useState<FaultSpec[]>([]);
+  const [faultsOpen, setFaultsOpen] = useState(false);
   // Fit a drawing that has parts when it opens; an empty one starts at 100 % (fitting its first part would zoom far in).
   const [fitOnOpen] = useState(() => document.components.length > 0);
 
@@ -343,6 +347,10 @@ function EditorFrame({
   const canSaveRun = useCan('circuit:run');
   // A saved run belongs to a saved revision: with unsaved changes the drawing being run is not one yet.
   const saveThisRun = () => {
+    if (faults.length > 0) {
+      setRunSaveNote('A run with injected faults is not kept: the revision it would belong to has no such faults.');
+      return;
+    }
     if (changes > 0) {
       setRunSaveNote('Save the revision first: a run is kept with a saved revision.');
       return;
@@ -396,7 +404,7 @@ function EditorFrame({
         onStart={() => {
           store.getState().select({ components: [], tubes: [], wires: [] });
           setRunSaveNote(null);
-          run.start(document);
+          run.start(faults.length ? applyFaults(document, faults) : document);
         }}
         onPause={run.pause}
         onResume={run.resume}
@@ -410,7 +418,25 @@ function EditorFrame({
         onTogglePlot={() => setPlotOpen((open) => !open)}
         onSaveRun={canSaveRun ? saveThisRun : undefined}
         saveNote={runSaveNote}
+        faultCount={faults.length}
+        faultsOpen={faultsOpen}
+        onToggleFaults={() => setFaultsOpen((open) => !open)}
       />
+      {faultsOpen ? (
+        <FaultPanel
+          document={document}
+          faults={faults}
+          onChange={(next) => {
+            setFaults(next);
+            // The run starts again with the faults as they now are.
+            if (!running) return;
+            hands.clear();
+            run.reset();
+            setRunSaveNote(null);
+            run.start(next.length ? applyFaults(document, next) : document);
+          }}
+        />
+      ) : null}
       {restoredAt ? (
         <div className="flex flex-wrap items-center gap-2 border-b border-rule bg-caution-soft px-3 py-1.5 text-sm text-ink" role="status" data-testid="draft-restored">
           Unsaved changes from {new Date(restoredAt).toLocaleString()} were restored.

@@ -62,6 +62,9 @@ export function CircuitEditorPage({ circuitId }: { circuitId: string }) {
           <TextLink href={`/circuits/${circuitId}/proofs`} className="text-xs" data-testid="proofs-link">
             Rules and proofs
           </TextLink>
+          <TextLink href={`/circuits/${circuitId}/logs`} className="text-xs" data-testid="logs-link">
+            Field logs
+          </TextLink>
         </div>
       }
       onReloadLatest={() => void queryClient.invalidateQueries({ queryKey: circuitKey(circuitId) })}

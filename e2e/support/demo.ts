@@ -22,3 +22,14 @@ export async function copyOfDemo(page: Page, file: string, title: string): Promi
   );
   return created.id;
 }
+
+/** The id of a circuit of the signed-in person's workspace, by its title (the demo circuits are seeded under theirs). */
+export async function circuitIdByTitle(page: Page, title: string): Promise<string> {
+  const id = await page.evaluate(async (wanted) => {
+    const response = await fetch('/api/circuits?pageSize=100');
+    const body = (await response.json()) as { items: Array<{ id: string; title: string }> };
+    return body.items.find((c) => c.title === wanted)?.id ?? null;
+  }, title);
+  if (!id) throw new Error(`no circuit titled "${title}"`);
+  return id;
+}

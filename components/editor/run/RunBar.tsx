@@ -27,6 +27,10 @@ interface RunBarProps {
   /** Why the run cannot be saved now, or what saving it did. */
   saveNote?: string | null;
   onSpeed: (speed: (typeof RUN_SPEEDS)[number]) => void;
+  /** Faults injected into the run by hand, and whether their panel is open. */
+  faultCount: number;
+  faultsOpen: boolean;
+  onToggleFaults: () => void;
 }
 
 /** Starts, pauses and stops a run, sets its speed and shows the machine time. */
@@ -80,6 +84,9 @@ export function RunBar(props: RunBarProps) {
           {props.plotOpen ? 'Hide plot' : 'Plot'}
         </Button>
       ) : null}
+      <Button size="sm" variant={props.faultCount ? 'secondary' : 'quiet'} onClick={props.onToggleFaults} aria-expanded={props.faultsOpen} title="Put faults into the run to see what they do" data-testid="run-faults">
+        {props.faultCount ? `Faults (${props.faultCount})` : 'Faults'}
+      </Button>
       {active && props.onSaveRun ? (
         <Button size="sm" variant="quiet" onClick={props.onSaveRun} disabled={status === 'starting' || status === 'failed'} title="Keep the inputs and the trace so far with this revision, for a reviewer to replay" data-testid="run-save">
           Save this run
