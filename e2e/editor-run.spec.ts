@@ -120,3 +120,35 @@ test('a new two-hand circuit drawn from the parts list runs: both buttons bring 
   await bothHandsNeeded(editor);
   await page.screenshot({ path: 'test-results/screens/editor-two-hand-1440.png' });
 });
+
+test('a stuck spool injected into the live run keeps the press in; taken out again, the press works', async ({ page }) => {
+  const editor = new EditorPage(page);
+  await editor.openByTitle(DEMO_CIRCUITS[0]!.title);
+  await page.getByTestId('run-faults').click();
+  await page.getByTestId('fault-pick').selectOption('spool-stuck|1V2');
+  await page.getByTestId('fault-add').click();
+  await expect(page.getByTestId('fault-description')).toContainText('1V2');
+  await expect(page.getByTestId('run-faults')).toHaveText('Faults (1)');
+  // The panel folds away and leaves the drawing its room; the fault stays in.
+  await page.getByTestId('run-faults').click();
+  await expect(page.getByTestId('fault-panel')).toHaveCount(0);
+  await page.getByTestId('run-start').click();
+  await page.getByTestId('fit').click();
+  await expect.poll(() => editor.runTime()).toBeGreaterThan(0.3);
+  await editor.component('1S1').click({ modifiers: ['Shift'] });
+  await editor.component('1S2').click({ modifiers: ['Shift'] });
+  const pressedAt = await editor.runTime();
+  await expect.poll(() => editor.runTime()).toBeGreaterThan(pressedAt + 1.5);
+  expect(await editor.extension('1A1')).toBeLessThan(0.001);
+  // A run with a fault in it is not the revision's: it is not saved.
+  await page.getByTestId('run-save').click();
+  await expect(page.getByTestId('run-save-note')).toContainText('injected faults');
+
+  // Removing the fault starts the run again, healthy.
+  await page.getByTestId('run-faults').click();
+  await page.getByTestId('fault-item').getByRole('button', { name: 'Remove' }).click();
+  await expect(page.getByTestId('run-faults')).toHaveText('Faults');
+  await page.getByTestId('run-faults').click();
+  await page.getByTestId('fit').click();
+  await bothHandsNeeded(editor);
+});

@@ -9,6 +9,8 @@ import { faultTypeById } from '@/engine/faults';
 import { cancelFaultSearch, fetchFaultSearch, fetchFaultSearches, isSearchActive, logKeys, startFaultSearch, type FaultSearchDetail, type UploadDetail } from './logs-api';
 
 const POLL_MS = 700;
+/** Percentage points of match a fault must add to the healthy drawing's to be listed as an explanation. */
+const MEANINGFUL_GAIN = 1;
 
 const STATUS_LABEL: Record<FaultSearchDetail['status'], string> = {
   queued: 'waiting for a worker',
@@ -73,6 +75,8 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
   if (!search.data) return <p className="text-sm text-ink-soft">Loading the search…</p>;
   const s = search.data;
   const active = isSearchActive(s.status);
+  // A fault that leaves the match where the healthy drawing has it explains nothing: it is counted, not listed.
+  const explaining = s.result ? s.result.candidates.filter((c) => c.match >= s.result!.baseline.match + MEANINGFUL_GAIN) : [];
   const progress = s.progress;
   return (
     <section className="space-y-2 rounded-md border border-rule bg-paper-raised p-3" aria-live="polite" data-testid="fault-search">
@@ -117,7 +121,7 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
                 </tr>
               </thead>
               <tbody>
-                {s.result.candidates.slice(0, 12).map((c, i) => (
+                {explaining.slice(0, 12).map((c, i) => (
                   <tr key={`${c.faultId}|${c.tag}`} className="border-t border-rule align-top" data-testid="fault-candidate">
                     <td className="value py-1 pr-2">{i + 1}</td>
                     <td className="py-1 pr-2 font-medium text-ink">{c.label}</td>
@@ -129,6 +133,11 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
               </tbody>
             </table>
           </div>
+          {s.result.candidates.length > explaining.length ? (
+            <p className="text-xs text-ink-soft" data-testid="fault-search-rest">
+              {s.result.candidates.length - explaining.length} other {s.result.candidates.length - explaining.length === 1 ? 'fault explains' : 'faults explain'} the log no better than the drawing as it is.
+            </p>
+          ) : null}
         </div>
       ) : null}
     </section>
