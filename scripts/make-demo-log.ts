@@ -8,6 +8,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { validateDocument } from '@/engine/document/validate';
+import { mulberry32 } from '@/engine/replay';
 import { compile } from '@/engine/solver/compile';
 import type { InputEvent } from '@/engine/solver/simulate';
 import { simulate } from '@/engine/solver/simulate';
@@ -100,16 +101,4 @@ function stateAt(edges: Edges, ms: number): number {
   let value = edges.initial;
   for (const change of edges.changes) if (change.ms <= ms) value = change.value;
   return value;
-}
-
-/** A small seeded generator (mulberry32), so the log is the same on every run. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }

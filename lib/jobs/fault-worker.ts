@@ -3,7 +3,7 @@ import { faultSearch, type FaultSearchProgress as EngineProgress } from '@/engin
 import type { ColumnMapping } from '@/lib/field-logs';
 import { documentOf } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
-import { FAULT_SEARCH_QUEUE, getBoss, type FaultSearchJob } from '@/lib/jobs/queue';
+import { FAULT_SEARCH_QUEUE, workQueue, type FaultSearchJob } from '@/lib/jobs/queue';
 import { claimFaultSearch, failFaultSearch, keepCancelledFaultSearch, recordFaultSearchResult, writeFaultSearchProgress } from '@/lib/replays/fault-search-records';
 import type { FaultSearchProgress } from '@/lib/replays/fault-searches';
 import { createFaultTaskPool, type FaultTaskPool } from '@/lib/replays/fault-task-pool';
@@ -13,8 +13,6 @@ import { CircuitRevision, Upload } from '@/models';
 /** Least time between two progress writes of one search; each write also reads whether it was cancelled. */
 const PROGRESS_WRITE_MS = 500;
 
-/** How often an idle worker asks the queue for a search (pg-boss's least is 0.5 s). */
-const POLL_S = 1;
 
 export interface FaultWorker {
   /** Stops taking searches, stops the one in hand (marked failed, to be started again) and closes the threads. */
@@ -74,25 +72,6 @@ async function workFaultSearch(faultSearchId: string, { pool, isStopping }: { po
  */
 export async function startFaultWorker({ threads }: { threads: number }): Promise<FaultWorker> {
   getSequelize();
-  const boss = await getBoss();
   const pool = threads > 0 ? createFaultTaskPool({ size: threads }) : null;
-  let stopping = false;
-  let inHand: Promise<void> | null = null;
-  await boss.work<FaultSearchJob>(FAULT_SEARCH_QUEUE, { batchSize: 1, pollingIntervalSeconds: POLL_S }, async ([job]) => {
-    if (!job) return;
-    inHand = workFaultSearch(job.data.faultSearchId, { pool, isStopping: () => stopping });
-    try {
-      await inHand;
-    } finally {
-      inHand = null;
-    }
-  });
-  return {
-    async stop() {
-      stopping = true;
-      await boss.offWork(FAULT_SEARCH_QUEUE);
-      await inHand;
-      await pool?.close();
-    },
-  };
+  return workQueue<FaultSearchJob>(FAULT_SEARCH_QUEUE, (data, isStopping) => workFaultSearch(data.faultSearchId, { pool, isStopping }), () => pool?.close() ?? Promise.resolve());
 }

@@ -3,7 +3,7 @@ import { checkRules, compileRulesText, longestWindowS } from '@/engine/proof/rul
 import { runProofSearch, type SearchProgress, type Variation } from '@/engine/proof/search';
 import { documentOf } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
-import { getBoss, PROOF_QUEUE, type ProofJob } from '@/lib/jobs/queue';
+import { PROOF_QUEUE, workQueue, type ProofJob } from '@/lib/jobs/queue';
 import { claimProof, failProof, keepCancelledResult, recordProofResult, writeProgress } from '@/lib/proofs/proof-records';
 import type { ProofProgress } from '@/lib/proofs/proofs';
 import { createTaskPool } from '@/lib/proofs/task-pool';
@@ -12,8 +12,6 @@ import { CircuitRevision } from '@/models';
 /** Least time between two progress writes of one proof; each write also reads whether it was cancelled. */
 const PROGRESS_WRITE_MS = 500;
 
-/** How often an idle worker asks the queue for a proof (pg-boss's least is 0.5 s). */
-const POLL_S = 1;
 
 export interface ProofWorker {
   /** Stops taking proofs, stops the one in hand (marked failed, to be started again) and closes the threads. */
@@ -78,25 +76,6 @@ async function workProof(proofId: string, { runBatch, isStopping }: { runBatch: 
  */
 export async function startProofWorker({ threads }: { threads: number }): Promise<ProofWorker> {
   getSequelize();
-  const boss = await getBoss();
   const pool = createTaskPool({ size: threads });
-  let stopping = false;
-  let inHand: Promise<void> | null = null;
-  await boss.work<ProofJob>(PROOF_QUEUE, { batchSize: 1, pollingIntervalSeconds: POLL_S }, async ([job]) => {
-    if (!job) return;
-    inHand = workProof(job.data.proofId, { runBatch: (document, rulesText, tasks) => pool.runBatch(document, rulesText, tasks), isStopping: () => stopping });
-    try {
-      await inHand;
-    } finally {
-      inHand = null;
-    }
-  });
-  return {
-    async stop() {
-      stopping = true;
-      await boss.offWork(PROOF_QUEUE);
-      await inHand;
-      await pool.close();
-    },
-  };
+  return workQueue<ProofJob>(PROOF_QUEUE, (data, isStopping) => workProof(data.proofId, { runBatch: (document, rulesText, tasks) => pool.runBatch(document, rulesText, tasks), isStopping }), () => pool.close());
 }

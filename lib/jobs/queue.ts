@@ -64,6 +64,43 @@ export async function sendFaultSearchJob(job: FaultSearchJob): Promise<string> {
   return id;
 }
 
+/** How often an idle worker asks a queue for a job (pg-boss's least is 0.5 s). */
+const POLL_S = 1;
+
+/** A queue worked in this process. */
+export interface QueueWorker {
+  /** Stops taking jobs, lets the one in hand see that it should stop and waits for it, then runs the worker's own closing. */
+  stop(): Promise<void>;
+}
+
+/**
+ * Works one queue in this process, one job at a time: `handle` gets the job's data and a
+ * question it asks while working (has stop() been called?). `close` runs once the job in hand
+ * has ended (the worker's threads, say).
+ */
+export async function workQueue<T extends object>(queue: string, handle: (data: T, isStopping: () => boolean) => Promise<void>, close: () => Promise<void> = async () => {}): Promise<QueueWorker> {
+  const boss = await getBoss();
+  let stopping = false;
+  let inHand: Promise<void> | null = null;
+  await boss.work<T>(queue, { batchSize: 1, pollingIntervalSeconds: POLL_S }, async ([job]) => {
+    if (!job) return;
+    inHand = handle(job.data, () => stopping);
+    try {
+      await inHand;
+    } finally {
+      inHand = null;
+    }
+  });
+  return {
+    async stop() {
+      stopping = true;
+      await boss.offWork(queue);
+      await inHand;
+      await close();
+    },
+  };
+}
+
 /** Stops this process's pg-boss, waiting for jobs still being worked, and closes its connections. */
 export async function stopBoss(): Promise<void> {
   const started = holder.airproofBoss;
