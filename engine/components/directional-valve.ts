@@ -193,9 +193,13 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
     return returnBy === 'spring' ? 1 : current;
   };
 
+  // Each position's opening of every passage, worked out once: a valve switches many times a run.
+  const openings = def.positions.map((position) => {
+    const open = new Set(position.passages.map(([f, t]) => [f, t].sort().join('-')));
+    return [...pairs].map(([id, ref]) => [ref, open.has(id) ? 1 : 0] as const);
+  });
   const applyPosition = (api: RuntimeApi, index: number) => {
-    const open = new Set(def.positions[index]!.passages.map(([f, t]) => [f, t].sort().join('-')));
-    for (const [id, ref] of pairs) api.setOpening(ref, open.has(id) ? 1 : 0);
+    for (const [ref, opening] of openings[index]!) api.setOpening(ref, opening);
   };
 
   const reconsider = (api: RuntimeApi) => {
@@ -224,11 +228,13 @@ export function buildValveBehaviour(ctx: BuildContext, def: ValveDefinition, pil
         const gauge = api.pressure(pilotNodes[s]!) - api.ambientPa();
         guardValues[s] = gauge - (sides[s]!.piloted ? threshold - hysteresis : threshold);
       }
-      links.forEach((link, i) => {
+      // A plain loop: guards run at every accepted step, and a callback per call is garbage.
+      for (let i = 0; i < links.length; i += 1) {
+        const link = links[i]!;
         const x = api.position(link.piston);
         guardValues[2 + 2 * i] = x - (link.positionM - ROLLER_WINDOW_M);
         guardValues[3 + 2 * i] = link.positionM + ROLLER_WINDOW_M - x;
-      });
+      }
       return guardValues;
     },
     onGuard(index, rising, api) {
