@@ -19,6 +19,12 @@ cleanup() {
 }
 trap cleanup INT TERM EXIT
 
+# The stand-ins first: the seed stores the demo field log's bytes.
+log "starting local mail catcher and storage stand-in"
+npx tsx scripts/local-services.ts &
+CHILDREN+=($!)
+node scripts/wait-for.mjs "$MAILBOX_URL/health" "$S3_ENDPOINT"
+
 log "migrating"
 npx tsx scripts/db-migrate.ts up
 log "seeding the demo workspace"
@@ -28,11 +34,6 @@ if bash scripts/needs-build.sh; then
   log "building"
   npx next build
 fi
-
-log "starting local mail catcher and storage stand-in"
-npx tsx scripts/local-services.ts &
-CHILDREN+=($!)
-node scripts/wait-for.mjs "$MAILBOX_URL/health" "$S3_ENDPOINT" 
 
 log "starting the proof worker"
 npx tsx --conditions=react-server scripts/worker.ts &

@@ -26,11 +26,21 @@ step() {
   fi
 }
 
+# The seed stores the demo field log's bytes, so the stand-ins run while it does; they stop
+# after it (one process, no npx in between), and Playwright starts its own on the same folder.
+seed_with_stand_ins() {
+  node --import tsx scripts/local-services.ts &
+  local services=$! rc=0
+  node scripts/wait-for.mjs "$MAILBOX_URL/health" "$S3_ENDPOINT" && npx tsx scripts/db-migrate.ts up && npx tsx --conditions=react-server scripts/db-seed.ts || rc=$?
+  kill "$services" && wait "$services" || true
+  return "$rc"
+}
+
 step "typecheck (tsc --noEmit)" npx tsc --noEmit
 step "lint (eslint)" npx eslint --max-warnings=0 .
 step "unit and reference tests (vitest)" npx vitest run --project unit --project reference
 step "integration tests (vitest, PostgreSQL)" npx vitest run --project integration
-step "migrate and seed the test database" bash -c "npx tsx scripts/db-migrate.ts up && npx tsx --conditions=react-server scripts/db-seed.ts"
+step "migrate and seed the test database" seed_with_stand_ins
 step "production build (next build)" npx next build
 step "browser tests (Playwright, Debian chromium)" npx playwright test
 

@@ -1,5 +1,5 @@
 import 'server-only';
-import { randomUUID } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import { LOG_EXTENSIONS, logFormatFromName, MAX_LOG_BYTES, sniffLogType } from '@/lib/field-logs';
 import { recordAudit } from '@/lib/audit';
 import type { Actor } from '@/lib/auth/actor';
@@ -8,10 +8,18 @@ import { getSequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
 import { personOf, type Person } from '@/lib/person';
 import { deleteObject, getObject, putObject } from '@/lib/storage/object-store';
-import { demoLogBytes, sha256Hex } from '@/lib/uploads/demo-logs';
 import { readLimitedBody } from '@/lib/uploads/read-body';
 import type { ListLogsQuery } from '@/lib/uploads/schemas';
 import { Circuit, Upload, User } from '@/models';
+
+/** Where a log's bytes are kept in object storage. */
+export function logObjectKey(uploadId: string): string {
+  return `logs/${uploadId}`;
+}
+
+export function sha256Hex(bytes: Uint8Array): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}
 
 /** Media types a log may be sent as; the bytes are checked whatever the header says. */
 const ACCEPTED_CONTENT_TYPES = ['application/octet-stream', 'text/csv', 'text/plain', 'application/x-ndjson', 'application/jsonl'];
@@ -93,7 +101,7 @@ export async function createLogUpload({ actor, circuitId, fileName, request }: {
     throw new AppError('invalid', 'file', `${fileName} is named as ${promised === 'csv' ? 'CSV' : 'JSON lines'} but holds ${sniffed.format === 'csv' ? 'CSV' : 'JSON lines'}; rename it`, 'fileName');
   }
   const id = randomUUID();
-  const storageKey = `logs/${id}`;
+  const storageKey = logObjectKey(id);
   const sha256 = sha256Hex(bytes);
   await putObject({ key: storageKey, body: bytes, contentType: 'application/octet-stream' });
   await Upload.create({ id, workspaceId: actor.workspaceId, circuitId, uploadedById: actor.userId, fileName, contentType, sizeBytes: bytes.byteLength, sha256, storageKey });
@@ -118,17 +126,9 @@ export async function listLogUploads({ workspaceId, circuitId, query }: { worksp
   return { items: (rows as LoadedUpload[]).map(uploadSummary), page: query.page, pageSize: query.pageSize, total: count };
 }
 
-/** The stored bytes of a log; a seeded demo log missing from storage is put there first (see demo-logs.ts). */
+/** The stored bytes of a log. */
 export async function readLogBytes(upload: Upload): Promise<Uint8Array> {
-  try {
-    return new Uint8Array(await new Response(await getObject(upload.storageKey)).arrayBuffer());
-  } catch (error) {
-    if (!(error instanceof AppError && error.type === 'not_found')) throw error;
-    const demo = await demoLogBytes(upload.storageKey);
-    if (!demo) throw error;
-    await putObject({ key: upload.storageKey, body: demo, contentType: 'application/octet-stream' });
-    return demo;
-  }
+  return new Uint8Array(await new Response(await getObject(upload.storageKey)).arrayBuffer());
 }
 
 /** Deletes a log (its replays and fault searches go with it; mappings saved from it stay for the circuit). Its uploader or an owner. */
