@@ -1,7 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { JOB_STATUSES, type JobStatus } from './job-status';
 
-export const FAULT_SEARCH_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
-export type FaultSearchStatus = (typeof FAULT_SEARCH_STATUSES)[number];
 
 /** A search for the faults that best explain one field log on one revision, worked by a job worker. */
 export class FaultSearch extends Model<InferAttributes<FaultSearch>, InferCreationAttributes<FaultSearch>> {
@@ -10,7 +9,7 @@ export class FaultSearch extends Model<InferAttributes<FaultSearch>, InferCreati
   declare revisionId: string;
   /** The column mapping as it was when the search started. */
   declare mapping: unknown;
-  declare status: CreationOptional<FaultSearchStatus>;
+  declare status: CreationOptional<JobStatus>;
   declare progress: unknown;
   declare result: unknown;
   declare error: string | null;
@@ -27,7 +26,7 @@ export class FaultSearch extends Model<InferAttributes<FaultSearch>, InferCreati
         uploadId: { type: DataTypes.UUID, allowNull: false },
         revisionId: { type: DataTypes.UUID, allowNull: false },
         mapping: { type: DataTypes.JSONB, allowNull: false },
-        status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued', validate: { isIn: [[...FAULT_SEARCH_STATUSES]] } },
+        status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued', validate: { isIn: [[...JOB_STATUSES]] } },
         progress: { type: DataTypes.JSONB, allowNull: true },
         result: { type: DataTypes.JSONB, allowNull: true },
         error: { type: DataTypes.TEXT, allowNull: true },

@@ -23,9 +23,7 @@ export { ROLES, type Role } from './roles';
 export { ReviewRequest, ReviewRequestReviewer };
 export { REVIEW_STATES, type ReviewState } from './review-request';
 export { CircuitRules, Proof, Scenario };
-export { PROOF_STATUSES, type ProofStatus } from './proof';
 export { FaultSearch, LogMapping };
-export { FAULT_SEARCH_STATUSES, type FaultSearchStatus } from './fault-search';
 
 let initialised: Sequelize | undefined;
 
@@ -71,3 +69,4 @@ export function initModels(sequelize: Sequelize): void {
   FaultSearch.belongsTo(CircuitRevision, { foreignKey: 'revisionId', as: 'revision' });
   FaultSearch.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
 }
+export { JOB_STATUSES, type JobStatus } from './job-status';

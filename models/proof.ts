@@ -1,7 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { JOB_STATUSES, type JobStatus } from './job-status';
 
-export const PROOF_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
-export type ProofStatus = (typeof PROOF_STATUSES)[number];
 
 /** An exhaustive timing search of one revision against a rules text, worked by a job worker. */
 export class Proof extends Model<InferAttributes<Proof>, InferCreationAttributes<Proof>> {
@@ -13,7 +12,7 @@ export class Proof extends Model<InferAttributes<Proof>, InferCreationAttributes
   declare quantumS: number;
   declare steps: number;
   declare settleS: number;
-  declare status: CreationOptional<ProofStatus>;
+  declare status: CreationOptional<JobStatus>;
   declare progress: unknown;
   declare result: unknown;
   declare error: string | null;
@@ -33,7 +32,7 @@ export class Proof extends Model<InferAttributes<Proof>, InferCreationAttributes
         quantumS: { type: DataTypes.DOUBLE, allowNull: false },
         steps: { type: DataTypes.INTEGER, allowNull: false },
         settleS: { type: DataTypes.DOUBLE, allowNull: false },
-        status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued', validate: { isIn: [[...PROOF_STATUSES]] } },
+        status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued', validate: { isIn: [[...JOB_STATUSES]] } },
         progress: { type: DataTypes.JSONB, allowNull: true },
         result: { type: DataTypes.JSONB, allowNull: true },
         error: { type: DataTypes.TEXT, allowNull: true },

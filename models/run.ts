@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { JOB_STATUSES, type JobStatus } from './job-status';
 
 export const RUN_KINDS = ['live', 'scenario', 'proof', 'replay'] as const;
-export const RUN_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
 
 /** One simulation of one revision; the trace itself lives in object storage at traceKey. */
 export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run>> {
@@ -10,7 +10,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare kind: (typeof RUN_KINDS)[number];
   /** What the person who saved it called it; null when they gave no name. */
   declare name: string | null;
-  declare status: (typeof RUN_STATUSES)[number];
+  declare status: JobStatus;
   declare inputs: unknown;
   declare summary: unknown;
   declare traceKey: string | null;
@@ -30,7 +30,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         revisionId: { type: DataTypes.UUID, allowNull: false },
         kind: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...RUN_KINDS]] } },
         name: { type: DataTypes.TEXT, allowNull: true },
-        status: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...RUN_STATUSES]] } },
+        status: { type: DataTypes.TEXT, allowNull: false, validate: { isIn: [[...JOB_STATUSES]] } },
         inputs: { type: DataTypes.JSONB, allowNull: false },
         summary: { type: DataTypes.JSONB, allowNull: true },
         traceKey: { type: DataTypes.TEXT, allowNull: true },

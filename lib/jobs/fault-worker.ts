@@ -3,26 +3,17 @@ import { faultSearch, type FaultSearchProgress as EngineProgress } from '@/engin
 import type { ColumnMapping } from '@/lib/field-logs';
 import { documentOf } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
-import { FAULT_SEARCH_QUEUE, workQueue, type FaultSearchJob } from '@/lib/jobs/queue';
+import { estimateS, progressWriter } from '@/lib/jobs/progress-writer';
+import { FAULT_SEARCH_QUEUE, workQueue, type FaultSearchJob, type QueueWorker } from '@/lib/jobs/queue';
 import { claimFaultSearch, failFaultSearch, keepCancelledFaultSearch, recordFaultSearchResult, writeFaultSearchProgress } from '@/lib/replays/fault-search-records';
 import type { FaultSearchProgress } from '@/lib/replays/fault-searches';
 import { createFaultTaskPool, type FaultTaskPool } from '@/lib/replays/fault-task-pool';
 import { recordedLogOf } from '@/lib/replays/recorded-log';
 import { CircuitRevision, Upload } from '@/models';
 
-/** Least time between two progress writes of one search; each write also reads whether it was cancelled. */
-const PROGRESS_WRITE_MS = 500;
-
-
-export interface FaultWorker {
-  /** Stops taking searches, stops the one in hand (marked failed, to be started again) and closes the threads. */
-  stop(): Promise<void>;
-}
-
 function withEstimate(p: EngineProgress, startedAt: number): FaultSearchProgress {
   const elapsedS = (Date.now() - startedAt) / 1000;
-  const estimateS = p.done > 0 ? (elapsedS * Math.max(0, p.total - p.done)) / p.done : null;
-  return { done: p.done, total: p.total, elapsedS, estimateS };
+  return { done: p.done, total: p.total, elapsedS, estimateS: estimateS(p.done, p.total, elapsedS) };
 }
 
 /** Works one search from queued to succeeded, failed or cancelled. Never throws: what goes wrong is written on the search. */
@@ -36,30 +27,14 @@ async function workFaultSearch(faultSearchId: string, { pool, isStopping }: { po
     const log = await recordedLogOf({ upload, mapping: search.mapping as ColumnMapping, document });
 
     const startedAt = Date.now();
-    let cancelled = false;
-    let latest: FaultSearchProgress | null = null;
-    let lastWriteAt = 0;
-    let writing: Promise<void> | null = null;
-    const onProgress = (p: EngineProgress): void => {
-      latest = withEstimate(p, startedAt);
-      const now = Date.now();
-      if (writing || now - lastWriteAt < PROGRESS_WRITE_MS) return;
-      lastWriteAt = now;
-      writing = writeFaultSearchProgress(search.id, latest)
-        .then((status) => {
-          cancelled = status === 'cancelled';
-        })
-        .catch((error: unknown) => console.error('[airproof] could not write fault search progress', search.id, error))
-        .finally(() => {
-          writing = null;
-        });
-    };
+    const progress = progressWriter((p: FaultSearchProgress) => writeFaultSearchProgress(search.id, p), `fault search ${search.id}`);
+    const onProgress = (p: EngineProgress): void => progress.report(withEstimate(p, startedAt));
 
-    const result = await faultSearch(document, log, { onProgress, shouldStop: () => cancelled || isStopping(), ...(pool ? { runBatch: (tasks) => pool.runBatch(tasks) } : {}) });
-    await writing;
-    if (cancelled) return await keepCancelledFaultSearch(search.id, result, latest);
+    const result = await faultSearch(document, log, { onProgress, shouldStop: () => progress.cancelled || isStopping(), ...(pool ? { runBatch: (tasks) => pool.runBatch(tasks) } : {}) });
+    await progress.settle();
+    if (progress.cancelled) return await keepCancelledFaultSearch(search.id, result, progress.latest);
     if (!result.complete) return await failFaultSearch(search.id, 'The worker was stopped before this search finished; start it again');
-    await recordFaultSearchResult(search.id, result, latest);
+    await recordFaultSearchResult(search.id, result, progress.latest);
   } catch (error) {
     console.error('[airproof] fault search failed', search.id, error);
     await failFaultSearch(search.id, `The search stopped with an error: ${error instanceof Error ? error.message : String(error)}`);
@@ -70,7 +45,7 @@ async function workFaultSearch(faultSearchId: string, { pool, isStopping }: { po
  * Works the fault-search queue in this process, one search at a time, its simulations spread over
  * `threads` worker threads (0: in this thread, for tests and one-core machines).
  */
-export async function startFaultWorker({ threads }: { threads: number }): Promise<FaultWorker> {
+export async function startFaultWorker({ threads }: { threads: number }): Promise<QueueWorker> {
   getSequelize();
   const pool = threads > 0 ? createFaultTaskPool({ size: threads }) : null;
   return workQueue<FaultSearchJob>(FAULT_SEARCH_QUEUE, (data, isStopping) => workFaultSearch(data.faultSearchId, { pool, isStopping }), () => pool?.close() ?? Promise.resolve());

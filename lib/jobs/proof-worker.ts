@@ -3,26 +3,17 @@ import { checkRules, compileRulesText, longestWindowS } from '@/engine/proof/rul
 import { runProofSearch, type SearchProgress, type Variation } from '@/engine/proof/search';
 import { documentOf } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
-import { PROOF_QUEUE, workQueue, type ProofJob } from '@/lib/jobs/queue';
+import { estimateS, progressWriter } from '@/lib/jobs/progress-writer';
+import { PROOF_QUEUE, workQueue, type ProofJob, type QueueWorker } from '@/lib/jobs/queue';
 import { claimProof, failProof, keepCancelledResult, recordProofResult, writeProgress } from '@/lib/proofs/proof-records';
 import type { ProofProgress } from '@/lib/proofs/proofs';
 import { createTaskPool } from '@/lib/proofs/task-pool';
 import { CircuitRevision } from '@/models';
 
-/** Least time between two progress writes of one proof; each write also reads whether it was cancelled. */
-const PROGRESS_WRITE_MS = 500;
-
-
-export interface ProofWorker {
-  /** Stops taking proofs, stops the one in hand (marked failed, to be started again) and closes the threads. */
-  stop(): Promise<void>;
-}
-
 type RunBatch = ReturnType<typeof createTaskPool>['runBatch'];
 
 function withEstimate(p: SearchProgress): ProofProgress {
-  const estimateS = p.done > 0 ? (p.elapsedS * Math.max(0, p.total - p.done)) / p.done : null;
-  return { ...p, estimateS };
+  return { ...p, estimateS: estimateS(p.done, p.total, p.elapsedS) };
 }
 
 /** Works one proof from queued to succeeded, failed or cancelled. Never throws: what goes wrong is written on the proof. */
@@ -36,34 +27,18 @@ async function workProof(proofId: string, { runBatch, isStopping }: { runBatch: 
     if (errors.length) throw new Error(`the rules no longer bind to revision ${revision.number}: line ${errors[0]!.line}, column ${errors[0]!.column}: ${errors[0]!.message}`);
     const lines = new Map(rules.map((rule) => [rule.name, rule.line]));
 
-    let cancelled = false;
-    let latest: ProofProgress | null = null;
-    let lastWriteAt = 0;
-    let writing: Promise<void> | null = null;
-    const onProgress = (p: SearchProgress): void => {
-      latest = withEstimate(p);
-      const now = Date.now();
-      if (writing || now - lastWriteAt < PROGRESS_WRITE_MS) return;
-      lastWriteAt = now;
-      writing = writeProgress(proof.id, latest)
-        .then((status) => {
-          cancelled = status === 'cancelled';
-        })
-        .catch((error: unknown) => console.error('[airproof] could not write proof progress', proof.id, error))
-        .finally(() => {
-          writing = null;
-        });
-    };
+    const progress = progressWriter((p: ProofProgress) => writeProgress(proof.id, p), `proof ${proof.id}`);
+    const onProgress = (p: SearchProgress): void => progress.report(withEstimate(p));
 
     const result = await runProofSearch(
       { document, variations: proof.variations as Variation[], quantumS: proof.quantumS, steps: proof.steps, settleS: proof.settleS, historyS: longestWindowS(rules) },
       (trace) => checkRules(rules, trace),
-      { runBatch: (tasks) => runBatch(document, proof.rulesText, tasks), onProgress, shouldStop: () => cancelled || isStopping() },
+      { runBatch: (tasks) => runBatch(document, proof.rulesText, tasks), onProgress, shouldStop: () => progress.cancelled || isStopping() },
     );
-    await writing;
-    if (cancelled) return await keepCancelledResult(proof.id, result, lines, latest);
+    await progress.settle();
+    if (progress.cancelled) return await keepCancelledResult(proof.id, result, lines, progress.latest);
     if (!result.complete) return await failProof(proof.id, 'The proof worker was stopped before this proof finished; start it again');
-    await recordProofResult({ proof, document, result, lines, progress: latest });
+    await recordProofResult({ proof, document, result, lines, progress: progress.latest });
   } catch (error) {
     console.error('[airproof] proof failed', proof.id, error);
     await failProof(proof.id, `The search stopped with an error: ${error instanceof Error ? error.message : String(error)}`);
@@ -74,7 +49,7 @@ async function workProof(proofId: string, { runBatch, isStopping }: { runBatch: 
  * Works the proof queue in this process, one proof at a time, each search spread over `threads`
  * worker threads. More processes (on more machines) each take their own proofs from the queue.
  */
-export async function startProofWorker({ threads }: { threads: number }): Promise<ProofWorker> {
+export async function startProofWorker({ threads }: { threads: number }): Promise<QueueWorker> {
   getSequelize();
   const pool = createTaskPool({ size: threads });
   return workQueue<ProofJob>(PROOF_QUEUE, (data, isStopping) => workProof(data.proofId, { runBatch: (document, rulesText, tasks) => pool.runBatch(document, rulesText, tasks), isStopping }), () => pool.close());

@@ -7,7 +7,7 @@ import { getSequelize } from '@/lib/db';
 import type { ProofProgress, StoredProofResult, StoredRuleOutcome } from '@/lib/proofs/proofs';
 import { storeRunTrace } from '@/lib/runs/save-run';
 import { simulateSavedRun, type RunSummary } from '@/lib/runs/simulate-saved-run';
-import { Proof, Run, type ProofStatus } from '@/models';
+import { Proof, Run, type JobStatus } from '@/models';
 
 /** What a counterexample run's summary holds beside the trace figures. */
 export interface ProofRunSummary extends RunSummary {
@@ -26,7 +26,7 @@ export async function claimProof(proofId: string): Promise<Proof | null> {
 }
 
 /** Writes the progress and reads back the status, so a cancel made meanwhile is seen by the search. */
-export async function writeProgress(proofId: string, progress: ProofProgress): Promise<ProofStatus> {
+export async function writeProgress(proofId: string, progress: ProofProgress): Promise<JobStatus> {
   getSequelize();
   const [, rows] = await Proof.update({ progress }, { where: { id: proofId }, returning: ['status'] });
   return rows[0]?.status ?? 'cancelled';

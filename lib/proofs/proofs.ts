@@ -12,7 +12,7 @@ import { personOf, type Person } from '@/lib/person';
 import { bindRulesText } from '@/lib/proofs/bind-rules';
 import { revisionWithDocument } from '@/lib/proofs/revision-with-document';
 import type { ListProofsQuery, StartProofBody } from '@/lib/proofs/schemas';
-import { CircuitRevision, Proof, User, type ProofStatus } from '@/models';
+import { CircuitRevision, Proof, User, type JobStatus } from '@/models';
 
 /** Progress of a running proof as the worker last wrote it. */
 export interface ProofProgress extends SearchProgress {
@@ -36,7 +36,7 @@ export interface ProofSummary {
   id: string;
   circuitId: string;
   revisionNumber: number;
-  status: ProofStatus;
+  status: JobStatus;
   variations: Variation[];
   quantumS: number;
   steps: number;

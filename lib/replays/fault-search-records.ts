@@ -2,7 +2,7 @@ import 'server-only';
 import type { FaultSearchResult } from '@/engine/replay';
 import { getSequelize } from '@/lib/db';
 import type { FaultSearchProgress } from '@/lib/replays/fault-searches';
-import { FaultSearch, type FaultSearchStatus } from '@/models';
+import { FaultSearch, type JobStatus } from '@/models';
 
 /** Takes a queued search for this worker; null when it is not queued any more (cancelled first). */
 export async function claimFaultSearch(faultSearchId: string): Promise<FaultSearch | null> {
@@ -12,7 +12,7 @@ export async function claimFaultSearch(faultSearchId: string): Promise<FaultSear
 }
 
 /** Writes the progress and reads back the status, so a cancel made meanwhile is seen by the search. */
-export async function writeFaultSearchProgress(faultSearchId: string, progress: FaultSearchProgress): Promise<FaultSearchStatus> {
+export async function writeFaultSearchProgress(faultSearchId: string, progress: FaultSearchProgress): Promise<JobStatus> {
   getSequelize();
   const [, rows] = await FaultSearch.update({ progress }, { where: { id: faultSearchId }, returning: ['status'] });
   return rows[0]?.status ?? 'cancelled';

@@ -11,7 +11,7 @@ import { recordedLogOf } from '@/lib/replays/recorded-log';
 import { revisionWithDocument } from '@/lib/proofs/revision-with-document';
 import type { ListFaultSearchesQuery, OnRevisionBody } from '@/lib/replays/schemas';
 import { findLogUpload } from '@/lib/uploads/uploads';
-import { CircuitRevision, FaultSearch, Upload, User, type FaultSearchStatus } from '@/models';
+import { CircuitRevision, FaultSearch, Upload, User, type JobStatus } from '@/models';
 
 /** Progress of a running fault search as the worker last wrote it. */
 export interface FaultSearchProgress {
@@ -29,7 +29,7 @@ export interface FaultSearchSummary {
   uploadId: string;
   circuitId: string;
   revisionNumber: number;
-  status: FaultSearchStatus;
+  status: JobStatus;
   progress: FaultSearchProgress | null;
   /** The best candidate of the result; null until there is one. */
   best: BestCandidate | null;

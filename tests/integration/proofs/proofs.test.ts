@@ -9,7 +9,8 @@ import { ruleTemplates } from '@/engine/proof/rules';
 import type { InputEvent } from '@/engine/solver/simulate';
 import type { Trace } from '@/engine/trace/trace';
 import { createCircuit } from '@/lib/circuits/create-circuit';
-import { startProofWorker, type ProofWorker } from '@/lib/jobs/proof-worker';
+import { startProofWorker } from '@/lib/jobs/proof-worker';
+import type { QueueWorker } from '@/lib/jobs/queue';
 import type { ProofDetail, ProofPage } from '@/lib/proofs/proofs';
 import { getObject } from '@/lib/storage/object-store';
 import { AuditEvent, Proof, Run } from '@/models';
@@ -26,7 +27,7 @@ const SYNCHRONOUS_S = 0.5;
 describe('proofs', () => {
   let ws: TestWorkspace;
   let circuitId: string;
-  let worker: ProofWorker;
+  let worker: QueueWorker;
   const { document } = lidPress();
   const twoHand = ruleTemplates(document).find((t) => t.id === 'two-hand-1A1')!;
   const STARTS_ONLY_ON_TWO_HANDS = '1A1 moves out only on a two-hand start (ISO 13851)';

@@ -3,7 +3,8 @@ import * as faultSearchCancel from '@/app/api/fault-searches/[id]/cancel/route';
 import * as faultSearchOne from '@/app/api/fault-searches/[id]/route';
 import * as logFaultSearches from '@/app/api/logs/[id]/fault-searches/route';
 import * as logMapping from '@/app/api/logs/[id]/mapping/route';
-import { startFaultWorker, type FaultWorker } from '@/lib/jobs/fault-worker';
+import { startFaultWorker } from '@/lib/jobs/fault-worker';
+import type { QueueWorker } from '@/lib/jobs/queue';
 import type { FaultSearchDetail, FaultSearchPage } from '@/lib/replays/fault-searches';
 import type { UploadSummary } from '@/lib/uploads/uploads';
 import { AuditEvent, FaultSearch } from '@/models';
@@ -16,7 +17,7 @@ const FINISHED = ['succeeded', 'failed', 'cancelled'];
 describe('fault searches', () => {
   let ws: TestWorkspace;
   let logId: string;
-  let worker: FaultWorker;
+  let worker: QueueWorker;
 
   beforeAll(async () => {
     ws = await createTestWorkspace('faults');
