@@ -4,21 +4,14 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormAlert } from '@/components/forms/FormAlert';
 import { Button } from '@/components/ui/Button';
+import { isJobActive, JOB_POLL_MS, JOB_STATUS_LABEL, timeToGo } from '@/components/ui/job-status';
+import { ProgressMeter } from '@/components/ui/ProgressMeter';
 import { useCan } from '@/components/workspace/use-current-workspace';
 import { faultTypeById } from '@/engine/faults';
-import { cancelFaultSearch, fetchFaultSearch, fetchFaultSearches, isSearchActive, logKeys, startFaultSearch, type FaultSearchDetail, type UploadDetail } from './logs-api';
+import { cancelFaultSearch, fetchFaultSearch, fetchFaultSearches, logKeys, startFaultSearch, type UploadDetail } from './logs-api';
 
-const POLL_MS = 700;
 /** Percentage points of match a fault must add to the healthy drawing's to be listed as an explanation. */
 const MEANINGFUL_GAIN = 1;
-
-const STATUS_LABEL: Record<FaultSearchDetail['status'], string> = {
-  queued: 'waiting for a worker',
-  running: 'searching',
-  succeeded: 'finished',
-  failed: 'could not finish',
-  cancelled: 'stopped',
-};
 
 /**
  * The fault search: every fault the drawing could have, each fitted to the log over its severity
@@ -62,7 +55,7 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
   const search = useQuery({
     queryKey: logKeys.search(searchId),
     queryFn: ({ signal }) => fetchFaultSearch(searchId, signal),
-    refetchInterval: (query) => (query.state.data && !isSearchActive(query.state.data.status) ? false : POLL_MS),
+    refetchInterval: (query) => (query.state.data && !isJobActive(query.state.data.status) ? false : JOB_POLL_MS),
   });
   const cancel = useMutation({
     mutationFn: () => cancelFaultSearch(searchId),
@@ -74,7 +67,7 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
   if (search.isError) return <FormAlert tone="error">{search.error.message}</FormAlert>;
   if (!search.data) return <p className="text-sm text-ink-soft">Loading the search…</p>;
   const s = search.data;
-  const active = isSearchActive(s.status);
+  const active = isJobActive(s.status);
   // A fault that leaves the match where the healthy drawing has it explains nothing: it is counted, not listed.
   const explaining = s.result ? s.result.candidates.filter((c) => c.match >= s.result!.baseline.match + MEANINGFUL_GAIN) : [];
   const progress = s.progress;
@@ -82,7 +75,7 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
     <section className="space-y-2 rounded-md border border-rule bg-paper-raised p-3" aria-live="polite" data-testid="fault-search">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h3 className="text-sm font-medium">
-          Fault search on revision {s.revisionNumber} · <span data-testid="fault-search-status">{STATUS_LABEL[s.status]}</span>
+          Fault search on revision {s.revisionNumber} · <span data-testid="fault-search-status">{JOB_STATUS_LABEL[s.status]}</span>
         </h3>
         {active && canRun ? (
           <Button size="sm" variant="secondary" onClick={() => cancel.mutate()} disabled={cancel.isPending} data-testid="fault-search-cancel">
@@ -91,14 +84,9 @@ function SearchView({ searchId, logId }: { searchId: string; logId: string }) {
         ) : null}
       </div>
       {progress ? (
-        <div className="space-y-1" data-testid="fault-search-progress">
-          <div className="h-2 overflow-hidden rounded bg-paper-sunk" role="progressbar" aria-valuemin={0} aria-valuemax={progress.total} aria-valuenow={progress.done} aria-label="Simulations run">
-            <div className="h-full bg-accent" style={{ width: `${progress.total ? Math.min(100, (progress.done / progress.total) * 100).toFixed(1) : 0}%` }} />
-          </div>
-          <p className="value text-xs text-ink-soft">
-            {progress.done} of about {progress.total} simulations · {progress.elapsedS.toFixed(1)} s elapsed{progress.estimateS !== null && active ? ` · about ${Math.ceil(progress.estimateS)} s to go` : ''}
-          </p>
-        </div>
+        <ProgressMeter done={progress.done} total={progress.total} label="Simulations run" testId="fault-search-progress">
+          {progress.done} of about {progress.total} simulations · {progress.elapsedS.toFixed(1)} s elapsed{timeToGo(progress.estimateS, s.status)}
+        </ProgressMeter>
       ) : active ? (
         <p className="text-sm text-ink-soft">Waiting for a worker to take the search…</p>
       ) : null}

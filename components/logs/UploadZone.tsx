@@ -1,6 +1,7 @@
 'use client';
 
 import { useRef, useState, type DragEvent } from 'react';
+import { ProgressMeter } from '@/components/ui/ProgressMeter';
 import { LOG_EXTENSIONS, logFormatFromName, MAX_LOG_BYTES } from '@/lib/field-logs';
 import { uploadLog, type UploadSummary } from './logs-api';
 
@@ -75,14 +76,9 @@ export function UploadZone({ circuitId, onUploaded }: { circuitId: string; onUpl
         <p className="text-xs text-ink-soft">The file is kept as it is, with its SHA-256; it is only ever read as data.</p>
       </div>
       {sending ? (
-        <div className="space-y-1" data-testid="log-upload-progress">
-          <div className="h-2 overflow-hidden rounded bg-paper-sunk" role="progressbar" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(sending.share * 100)} aria-label={`Uploading ${sending.name}`}>
-            <div className="h-full bg-accent" style={{ width: `${(sending.share * 100).toFixed(0)}%` }} />
-          </div>
-          <p className="text-xs text-ink-soft">
-            Uploading {sending.name}: {(sending.share * 100).toFixed(0)} %
-          </p>
-        </div>
+        <ProgressMeter done={Math.round(sending.share * 100)} total={100} label={`Uploading ${sending.name}`} testId="log-upload-progress">
+          Uploading {sending.name}: {(sending.share * 100).toFixed(0)} %
+        </ProgressMeter>
       ) : null}
       {problem ? (
         <p className="text-sm text-danger" role="alert" data-testid="log-upload-error">

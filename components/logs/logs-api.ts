@@ -76,6 +76,3 @@ export function uploadLog(circuitId: string, file: File, onProgress: (share: num
     xhr.send(file);
   });
 }
-
-/** A fault search still has work ahead while it waits for a worker or is being worked. */
-export const isSearchActive = (status: FaultSearchDetail['status']) => status === 'queued' || status === 'running';

@@ -5,9 +5,10 @@ import { requestJson } from '@/components/api/request-json';
 import { circuitKey } from '@/components/editor/CircuitEditorPage';
 import { FormAlert } from '@/components/forms/FormAlert';
 import { Button } from '@/components/ui/Button';
+import { isJobActive } from '@/components/ui/job-status';
 import { TextLink } from '@/components/ui/TextLink';
 import type { CircuitDetail } from '@/lib/circuits/get-circuit';
-import { fetchProof, isProofActive, proofKeys } from './proof-api';
+import { fetchProof, proofKeys } from './proof-api';
 import { RunSequence } from './RunSequence';
 
 const KIND_WORDS: Record<string, string> = {
@@ -55,7 +56,7 @@ export function ProofReport({ circuitId, proofId }: { circuitId: string; proofId
         assessment under the applicable machinery-safety standards and local codes, and a validation on the built machine, signed off by a competent person. It covers only the inputs, failures,
         time step and depth stated; the model is only as good as its parameters.
       </section>
-      {isProofActive(p.status) ? <FormAlert tone="error">This search is still running: the report is not final.</FormAlert> : null}
+      {isJobActive(p.status) ? <FormAlert tone="error">This search is still running: the report is not final.</FormAlert> : null}
       {p.error ? <FormAlert tone="error">The search could not finish: {p.error}</FormAlert> : null}
       <section className="space-y-2">
         <h2 className="text-lg">What was searched</h2>

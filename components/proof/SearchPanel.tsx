@@ -7,12 +7,14 @@ import { ChangeTime } from '@/components/circuits/ChangeTime';
 import { FormAlert } from '@/components/forms/FormAlert';
 import { SafetyNote } from '@/components/shell/SafetyNote';
 import { Button } from '@/components/ui/Button';
+import { isJobActive, JOB_POLL_MS, JOB_STATUS_LABEL, timeToGo } from '@/components/ui/job-status';
 import { Pagination } from '@/components/ui/Pagination';
+import { ProgressMeter } from '@/components/ui/ProgressMeter';
 import { TextLink } from '@/components/ui/TextLink';
 import { useCan } from '@/components/workspace/use-current-workspace';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { describeVariations, type Variation, type VariationKind } from '@/engine/proof/search';
-import { cancelProof, fetchProof, fetchProofs, isProofActive, proofKeys, startProof, type ProofDetail, type ProofSummary } from './proof-api';
+import { cancelProof, fetchProof, fetchProofs, proofKeys, startProof, type ProofDetail } from './proof-api';
 import type { ReplayTarget } from './replay-target';
 
 const KIND_LABEL: Record<VariationKind, string> = {
@@ -22,17 +24,6 @@ const KIND_LABEL: Record<VariationKind, string> = {
   'supply-loss': 'air lost',
   'power-loss': 'control power lost',
 };
-
-const STATUS_LABEL: Record<ProofSummary['status'], string> = {
-  queued: 'waiting for a worker',
-  running: 'searching',
-  succeeded: 'finished',
-  failed: 'could not finish',
-  cancelled: 'stopped',
-};
-
-/** How often an open search is asked for its progress, ms. */
-const POLL_MS = 700;
 
 /**
  * The exhaustive timing search: which inputs, failures and energy losses to vary, at what time
@@ -175,7 +166,7 @@ export function SearchPanel({
                       <ChangeTime iso={p.createdAt} /> <span className="text-xs text-ink-soft">by {p.createdBy.name}</span>
                     </td>
                     <td className="value py-1 pr-2">{p.revisionNumber}</td>
-                    <td className="py-1 pr-2">{STATUS_LABEL[p.status]}</td>
+                    <td className="py-1 pr-2">{JOB_STATUS_LABEL[p.status]}</td>
                     <td className="value py-1 pr-2">{p.outcome ? `${p.outcome.passed} / ${p.outcome.failed}${p.outcome.complete ? '' : ' (partial)'}` : '–'}</td>
                     <td className="py-1 text-right">
                       <Button size="sm" variant="quiet" onClick={() => onProofId(p.id)}>
@@ -225,7 +216,7 @@ function ProofView({ proofId, circuitId, onReplay }: { proofId: string; circuitI
   const proof = useQuery({
     queryKey: proofKeys.proof(proofId),
     queryFn: ({ signal }) => fetchProof(proofId, signal),
-    refetchInterval: (query) => (query.state.data && !isProofActive(query.state.data.status) ? false : POLL_MS),
+    refetchInterval: (query) => (query.state.data && !isJobActive(query.state.data.status) ? false : JOB_POLL_MS),
   });
   const cancel = useMutation({
     mutationFn: () => cancelProof(proofId),
@@ -237,12 +228,12 @@ function ProofView({ proofId, circuitId, onReplay }: { proofId: string; circuitI
   if (proof.isError) return <FormAlert tone="error">{proof.error.message}</FormAlert>;
   if (!proof.data) return <p className="text-sm text-ink-soft">Loading the search…</p>;
   const p = proof.data;
-  const active = isProofActive(p.status);
+  const active = isJobActive(p.status);
   return (
     <section className="space-y-2 rounded-md border border-rule bg-paper-raised p-3" data-testid="proof-view" aria-live="polite">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h3 className="text-sm font-medium">
-          Search of revision {p.revisionNumber} · <span data-testid="proof-status">{STATUS_LABEL[p.status]}</span>
+          Search of revision {p.revisionNumber} · <span data-testid="proof-status">{JOB_STATUS_LABEL[p.status]}</span>
         </h3>
         <div className="flex gap-2">
           {active && canRun ? (
@@ -271,17 +262,11 @@ function ProofView({ proofId, circuitId, onReplay }: { proofId: string; circuitI
 
 function ProgressBar({ proof }: { proof: ProofDetail }) {
   const progress = proof.progress!;
-  const share = progress.total > 0 ? Math.min(1, progress.done / progress.total) : 0;
   return (
-    <div className="space-y-1" data-testid="proof-progress">
-      <div className="h-2 overflow-hidden rounded bg-paper-sunk" role="progressbar" aria-valuemin={0} aria-valuemax={progress.total} aria-valuenow={progress.done} aria-label="Sequences simulated">
-        <div className="h-full bg-accent" style={{ width: `${(share * 100).toFixed(1)}%` }} />
-      </div>
-      <p className="value text-xs text-ink-soft">
-        {progress.done.toLocaleString('en-GB')} of about {progress.total.toLocaleString('en-GB')} sequences · depth {progress.level} of {progress.levels} · {progress.states.toLocaleString('en-GB')} distinct states · {progress.elapsedS.toFixed(1)} s
-        elapsed{progress.estimateS !== null && isProofActive(proof.status) ? ` · about ${Math.ceil(progress.estimateS)} s to go` : ''}
-      </p>
-    </div>
+    <ProgressMeter done={progress.done} total={progress.total} label="Sequences simulated" testId="proof-progress">
+      {progress.done.toLocaleString('en-GB')} of about {progress.total.toLocaleString('en-GB')} sequences · depth {progress.level} of {progress.levels} · {progress.states.toLocaleString('en-GB')} distinct states · {progress.elapsedS.toFixed(1)} s
+      elapsed{timeToGo(progress.estimateS, proof.status)}
+    </ProgressMeter>
   );
 }
 

@@ -54,6 +54,3 @@ export const fetchProof = (proofId: string, signal: AbortSignal) => requestJson<
 export const startProof = (circuitId: string, body: StartProofBody) => sendJson<{ id: string }>('POST', `${circuitBase(circuitId)}/proofs`, body);
 
 export const cancelProof = (proofId: string) => sendJson<ProofDetail>('POST', `/api/proofs/${encodeURIComponent(proofId)}/cancel`);
-
-/** A proof still has work ahead while it is waiting for a worker or being worked. */
-export const isProofActive = (status: ProofDetail['status']) => status === 'queued' || status === 'running';
