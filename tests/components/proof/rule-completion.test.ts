@@ -1,10 +1,9 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { completionAt } from '@/components/proof/rule-completion';
-import { circuitDocumentSchema } from '@/engine/document/schema';
 import { ruleVocabulary } from '@/engine/proof/rules';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-const document = circuitDocumentSchema.parse(JSON.parse(readFileSync('demo/circuits/lid-press-two-hand.json', 'utf8')));
+const document = demoDocument('lid-press-two-hand');
 const vocabulary = ruleVocabulary(document);
 
 /** Completion with the caret at the end of the text. */

@@ -1,20 +1,15 @@
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
 import { addComponent, moveComponents, removeItems } from '@/components/editor/document-commands';
 import { setTag } from '@/components/editor/inspector-commands';
 import { changeTableRows } from '@/components/review/change-table';
 import { diffDocuments } from '@/engine/document/diff';
-import { circuitDocumentSchema, type CircuitDocument } from '@/engine/document/schema';
+import { type CircuitDocument } from '@/engine/document/schema';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-function demo(name: string): CircuitDocument {
-  return circuitDocumentSchema.parse(JSON.parse(readFileSync(path.join(process.cwd(), 'demo', 'circuits', `${name}.json`), 'utf8')));
-}
-
-const twoHand = demo('lid-press-two-hand');
-const relayControl = demo('lid-press-relay-control');
-const cartonClamp = demo('carton-clamp-sequence');
+const twoHand = demoDocument('lid-press-two-hand');
+const relayControl = demoDocument('lid-press-relay-control');
+const cartonClamp = demoDocument('carton-clamp-sequence');
 
 const component = (doc: CircuitDocument, id: string) => doc.components.find((c) => c.id === id)!;
 const rowsAfter = (before: CircuitDocument, recipe: (draft: CircuitDocument) => void) => changeTableRows(diffDocuments(before, produce(before, recipe)));

@@ -1,19 +1,14 @@
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
 import { addComponent, connect, moveComponents, removeItems, setBends } from '@/components/editor/document-commands';
 import { setTag } from '@/components/editor/inspector-commands';
 import { diffDocuments, type DocumentDiff } from '@/engine/document/diff';
-import { circuitDocumentSchema, type CircuitDocument } from '@/engine/document/schema';
+import { type CircuitDocument } from '@/engine/document/schema';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-function demo(name: string): CircuitDocument {
-  return circuitDocumentSchema.parse(JSON.parse(readFileSync(path.join(process.cwd(), 'demo', 'circuits', `${name}.json`), 'utf8')));
-}
-
-const twoHand = demo('lid-press-two-hand');
-const relayControl = demo('lid-press-relay-control');
-const cartonClamp = demo('carton-clamp-sequence');
+const twoHand = demoDocument('lid-press-two-hand');
+const relayControl = demoDocument('lid-press-relay-control');
+const cartonClamp = demoDocument('carton-clamp-sequence');
 
 const component = (doc: CircuitDocument, id: string) => doc.components.find((c) => c.id === id)!;
 const nothing = { added: [], removed: [], changed: [] };
@@ -31,7 +26,7 @@ const EMPTY: DocumentDiff = {
 describe('diffDocuments', () => {
   it('finds nothing between a document and a copy of it', () => {
     for (const name of ['lid-press-two-hand', 'lid-press-relay-control', 'carton-clamp-sequence', 'reject-gate-quick-exhaust']) {
-      expect(diffDocuments(demo(name), demo(name)), name).toEqual(EMPTY);
+      expect(diffDocuments(demoDocument(name), demoDocument(name)), name).toEqual(EMPTY);
     }
   });
 

@@ -1,11 +1,11 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { observedSequence } from '@/engine/proof/sequence';
-import { circuitDocumentSchema, type CircuitDocument } from '@/engine/document/schema';
+import { type CircuitDocument } from '@/engine/document/schema';
 import { compile } from '@/engine/solver/compile';
-import { simulate, type InputEvent } from '@/engine/solver/simulate';
+import { simulate } from '@/engine/solver/simulate';
 import { TRACE_FORMAT_VERSION, type Trace, type TraceEvent } from '@/engine/trace/trace';
 import { TestCircuit } from '../support/circuit';
+import { demoDocument, demoInputs } from '@/tests/support/demo-circuits';
 
 /** A trace sampled every 0.1 s from position functions (m) of the given components, with the given events. */
 function handTrace(untilS: number, positions: Record<string, (t: number) => number>, events: TraceEvent[]): Trace {
@@ -182,8 +182,8 @@ describe('observedSequence on hand-built traces', () => {
 
 describe('observedSequence on simulated demo circuits', () => {
   const run = (name: string, untilS: number) => {
-    const document = circuitDocumentSchema.parse(JSON.parse(readFileSync(`demo/circuits/${name}.json`, 'utf8')));
-    const inputs = JSON.parse(readFileSync(`demo/circuits/${name}.inputs.json`, 'utf8')) as InputEvent[];
+    const document = demoDocument(name);
+    const inputs = demoInputs(name);
     const trace = simulate(compile(document).model!, inputs, { untilS, intervalS: 0.01 });
     return { trace, sequence: observedSequence(document, trace) };
   };

@@ -1,18 +1,11 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { CircuitDocument } from '@/engine/document/schema';
-import { validateDocument } from '@/engine/document/validate';
 import { commandsToInputs, ReplayError, replayLog, type RecordedLog, type RecordedSignal } from '@/engine/replay';
-
-function demo(name: string): CircuitDocument {
-  const checked = validateDocument(JSON.parse(readFileSync(`demo/circuits/${name}.json`, 'utf8')));
-  if (!checked.ok) throw new Error(`${name} does not validate`);
-  return checked.document;
-}
+import { demoDocument } from '@/tests/support/demo-circuits';
 
 /** The relay-controlled lid press plus loose parts of every kind a command can name (no wiring: only their types matter here). */
 const doc: CircuitDocument = (() => {
-  const base = demo('lid-press-relay-control');
+  const base = demoDocument('lid-press-relay-control');
   const like = base.components[0]!;
   const extra = (id: string, tag: string, type: string, parameters: Record<string, string> = {}) => ({ ...like, id, tag, type, parameters });
   return {
@@ -109,7 +102,7 @@ describe('commandsToInputs', () => {
 
 describe('replayLog', () => {
   it('drives the drawing with the commands to the end of the log plus the settle time, every 10 ms', () => {
-    const press = demo('lid-press-relay-control');
+    const press = demoDocument('lid-press-relay-control');
     const { trace, inputs } = replayLog(press, { durationS: 2, signals: [command('S1', 'pressed', [0, 0.2, 0.4], [0, 1, 0])] });
     expect(inputs).toHaveLength(2);
     expect(trace.intervalS).toBe(0.01);
@@ -121,7 +114,7 @@ describe('replayLog', () => {
   });
 
   it('says why when the drawing does not compile', () => {
-    const press = demo('lid-press-relay-control');
+    const press = demoDocument('lid-press-relay-control');
     const broken = { ...press, wires: [...press.wires, { ...press.wires[0]!, id: 'bad', to: { component: 'main', terminal: '1' } }] } as CircuitDocument;
     expect(() => replayLog(broken, { durationS: 1, signals: [] })).toThrow(/does not compile/);
   });

@@ -1,16 +1,11 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { CircuitDocument } from '@/engine/document/schema';
-import { validateDocument } from '@/engine/document/validate';
 import { compareRun, ReplayError, type RecordedLog, type RecordedSignal } from '@/engine/replay';
 import { pairEdges } from '@/engine/replay/compare';
 import type { Trace } from '@/engine/trace/trace';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-const doc: CircuitDocument = (() => {
-  const checked = validateDocument(JSON.parse(readFileSync('demo/circuits/lid-press-relay-control.json', 'utf8')));
-  if (!checked.ok) throw new Error('the demo circuit does not validate');
-  return checked.document;
-})();
+const doc: CircuitDocument = demoDocument('lid-press-relay-control');
 
 const N = 301; // 0 … 3 s every 10 ms
 const time = Array.from({ length: N }, (_, i) => i / 100);

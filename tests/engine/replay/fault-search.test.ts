@@ -1,15 +1,10 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { CircuitDocument } from '@/engine/document/schema';
-import { validateDocument } from '@/engine/document/validate';
 import { applyFault, faultsFor } from '@/engine/faults';
 import { evaluateFaultTask, faultSearch, recordTrace, replayLog, type FaultSearchProgress, type FaultTask, type RecordedLog } from '@/engine/replay';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-const healthy: CircuitDocument = (() => {
-  const checked = validateDocument(JSON.parse(readFileSync('demo/circuits/lid-press-relay-control.json', 'utf8')));
-  if (!checked.ok) throw new Error('the demo circuit does not validate');
-  return checked.document;
-})();
+const healthy: CircuitDocument = demoDocument('lid-press-relay-control');
 
 const script: RecordedLog = { durationS: 2.5, signals: [{ tag: 'S1', word: 'pressed', role: 'command', kind: 'state', times: [0, 0.2, 0.4], values: [0, 1, 0] }] };
 

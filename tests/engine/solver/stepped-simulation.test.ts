@@ -1,14 +1,11 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { circuitDocumentSchema } from '@/engine/document/schema';
 import { compile } from '@/engine/solver/compile';
 import { simulate, startSimulation, type InputEvent } from '@/engine/solver/simulate';
 import { MemoryTraceSink, type Trace } from '@/engine/trace/trace';
+import { demoDocument, demoInputs } from '@/tests/support/demo-circuits';
 
 function demo(name: string) {
-  const document = circuitDocumentSchema.parse(JSON.parse(readFileSync(`demo/circuits/${name}.json`, 'utf8')));
-  const inputs = JSON.parse(readFileSync(`demo/circuits/${name}.inputs.json`, 'utf8')) as InputEvent[];
-  return { document, inputs };
+  return { document: demoDocument(name), inputs: demoInputs(name) };
 }
 
 const OPTIONS = { untilS: 6, intervalS: 0.01 };

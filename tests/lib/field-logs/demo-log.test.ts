@@ -1,16 +1,14 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { validateDocument } from '@/engine/document/validate';
 import { ruleVocabulary } from '@/engine/proof/rules';
 import { compile } from '@/engine/solver/compile';
 import { simulate } from '@/engine/solver/simulate';
 import { applyMapping } from '@/lib/field-logs/apply-mapping';
 import { suggestMapping } from '@/lib/field-logs/mapping';
 import { parseLog } from '@/lib/field-logs/parse-log';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-const checked = validateDocument(JSON.parse(readFileSync('demo/circuits/lid-press-relay-control.json', 'utf8')));
-if (!checked.ok) throw new Error(checked.messages.join('\n'));
-const document = checked.document;
+const document = demoDocument('lid-press-relay-control');
 
 const risingEdges = (times: number[], values: number[]) => times.filter((_, i) => values[i] === 1 && i > 0);
 

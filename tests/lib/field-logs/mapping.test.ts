@@ -1,15 +1,12 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { validateDocument } from '@/engine/document/validate';
 import { ruleVocabulary } from '@/engine/proof/rules';
 import { columnMappingSchema, mappingSchemaFor, suggestMapping, type ColumnMapping } from '@/lib/field-logs/mapping';
 import { parseLog } from '@/lib/field-logs/parse-log';
 import type { LogTable } from '@/lib/field-logs/types';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
-function vocabularyOf(file: string) {
-  const checked = validateDocument(JSON.parse(readFileSync(file, 'utf8')));
-  if (!checked.ok) throw new Error(checked.messages.join('\n'));
-  return ruleVocabulary(checked.document);
+function vocabularyOf(name: string) {
+  return ruleVocabulary(demoDocument(name));
 }
 
 function tableWith(columns: string[]): LogTable {
@@ -69,7 +66,7 @@ describe('columnMappingSchema', () => {
 });
 
 describe('suggestMapping', () => {
-  const relay = vocabularyOf('demo/circuits/lid-press-relay-control.json');
+  const relay = vocabularyOf('lid-press-relay-control');
 
   it('matches column names to tags, words, ports and units, with buttons and solenoid coils as commands', () => {
     const table = tableWith(['time', '1B2', 'S1 pressed', 'p_1A1_A', 'p_1A1_B_kpa', '1M1_valve', 'K1_operated', '1A1_pos_mm', 'H1', 'oil_temp']);
@@ -99,7 +96,7 @@ describe('suggestMapping', () => {
   });
 
   it('takes a cap or rod pressure of the only cylinder, and a hand-worked valve as a command', () => {
-    const twoHand = vocabularyOf('demo/circuits/lid-press-two-hand.json');
+    const twoHand = vocabularyOf('lid-press-two-hand');
     const table = tableWith(['time', 'p_cap_bar', 'p_rod_bar', '1S1']);
     expect(suggestMapping(table, twoHand).columns).toEqual([
       { column: 'p_cap_bar', tag: '1A1', word: 'pressure:A', role: 'observation', unit: 'bar-gauge' },

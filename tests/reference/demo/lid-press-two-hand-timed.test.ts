@@ -1,9 +1,8 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { circuitDocumentSchema } from '@/engine/document/schema';
 import type { InputEvent } from '@/engine/solver/simulate';
 import type { Trace } from '@/engine/trace/trace';
 import { run, values } from '../solver/helpers';
+import { demoDocument, demoInputs } from '@/tests/support/demo-circuits';
 
 /**
  * The timed two-hand demo against the two-hand control rules of ISO 13851 (synchronous actuation:
@@ -12,7 +11,7 @@ import { run, values } from '../solver/helpers';
  * up through K1, K2 and KT1's NC contact and holds itself through K1, K2; K3 drives 1M1.
  */
 
-const document = circuitDocumentSchema.parse(JSON.parse(readFileSync('demo/circuits/lid-press-two-hand-timed.json', 'utf8')));
+const document = demoDocument('lid-press-two-hand-timed');
 
 const press = (t: number, component: string): InputEvent => ({ t, component, action: 'press' });
 const release = (t: number, component: string): InputEvent => ({ t, component, action: 'release' });
@@ -27,7 +26,7 @@ const arrivals = (trace: Trace, end: 'extended' | 'retracted') =>
 
 describe('lid press, timed two-hand start (ISO 13851 synchronous actuation and re-initiation)', () => {
   it('the stored good stroke extends and retracts the press', () => {
-    const inputs = JSON.parse(readFileSync('demo/circuits/lid-press-two-hand-timed.inputs.json', 'utf8')) as InputEvent[];
+    const inputs = demoInputs('lid-press-two-hand-timed');
     const trace = simulateInputs(inputs, 4);
     expect(arrivals(trace, 'extended')).toHaveLength(1);
     expect(arrivals(trace, 'retracted')).toHaveLength(1);

@@ -1,15 +1,8 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { CircuitDocument } from '@/engine/document/schema';
-import { validateDocument } from '@/engine/document/validate';
 import { checkRules, compileRulesText, longestWindowS, ruleTemplates } from '@/engine/proof/rules';
 import { runProofSearch, type SearchCheck } from '@/engine/proof/search';
-
-function demo(name: string): CircuitDocument {
-  const checked = validateDocument(JSON.parse(readFileSync(`demo/circuits/${name}.json`, 'utf8')));
-  if (!checked.ok) throw new Error(checked.messages.join('\n'));
-  return checked.document;
-}
+import { demoDocument } from '@/tests/support/demo-circuits';
 
 /** The template's ISO 13851 rules, written by Airproof for the drawing's own tags. */
 function twoHandRules(document: CircuitDocument) {
@@ -21,7 +14,7 @@ function twoHandRules(document: CircuitDocument) {
 }
 
 async function search(name: string, buttons: [string, string]) {
-  const document = demo(name);
+  const document = demoDocument(name);
   const rules = twoHandRules(document);
   const check: SearchCheck = (trace) => checkRules(rules, trace);
   // A 0.3 s step keeps every press pair off the 0.5 s limit itself: 0.3 s apart is within it, 0.6 s is not.

@@ -1,10 +1,9 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { validateDocument } from '@/engine/document/validate';
 import { applyFault, faultsFor } from '@/engine/faults';
 import { faultSearch, recordTrace, replayLog, type RecordedLog } from '@/engine/replay';
 import type { InputEvent } from '@/engine/solver/simulate';
 import type { CircuitDocument } from '@/engine/document/schema';
+import { demoDocument } from '@/tests/support/demo-circuits';
 
 /**
  * The issue's check: a fault injected into the Harrow Lane lid press, simulated, written out as a
@@ -12,11 +11,7 @@ import type { CircuitDocument } from '@/engine/document/schema';
  * severity within 15 %.
  */
 
-const healthy = (() => {
-  const checked = validateDocument(JSON.parse(readFileSync('demo/circuits/lid-press-relay-control.json', 'utf8')));
-  if (!checked.ok) throw new Error('the demo circuit does not validate');
-  return checked.document;
-})();
+const healthy = demoDocument('lid-press-relay-control');
 
 /** Two press cycles: S1 tapped at 0.2 s and again at 2.5 s. */
 const SCRIPT: InputEvent[] = [

@@ -1,16 +1,9 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { CircuitDocument } from '@/engine/document/schema';
-import { validateDocument } from '@/engine/document/validate';
 import { describeVariations, runProofSearch, type SearchCheck, type SearchResult, type SearchSpec } from '@/engine/proof/search';
 import { signal, type Trace } from '@/engine/trace/trace';
 import { TestCircuit } from '../../support/circuit';
-
-function demo(name: string): CircuitDocument {
-  const checked = validateDocument(JSON.parse(readFileSync(`demo/circuits/${name}.json`, 'utf8')));
-  if (!checked.ok) throw new Error(checked.messages.join('\n'));
-  return checked.document;
-}
+import { demoDocument } from '@/tests/support/demo-circuits';
 
 /** A rule over one signal: it must never exceed a level. */
 function never(name: string, signalName: string, level: number): SearchCheck {
@@ -33,7 +26,7 @@ const buttons = (n: number) => Array.from({ length: n }, (_, i) => ({ tag: `S${i
 const alwaysHolds: SearchCheck = () => [{ name: 'nothing', holds: true, violatedAtS: null, explanation: '' }];
 
 describe('proof search', () => {
-  const twoHand = demo('lid-press-two-hand');
+  const twoHand = demoDocument('lid-press-two-hand');
   const twoHandSpec = (steps: number): SearchSpec => ({ document: twoHand, variations: [{ tag: '1S1', kind: 'button' }, { tag: '1S2', kind: 'button' }], quantumS: 0.25, steps, settleS: 1, historyS: 0 });
 
   it('finds the shortest counterexample: the two-hand press extends at level 1 with both buttons pressed at once', async () => {
@@ -115,7 +108,7 @@ describe('proof search', () => {
   });
 
   it('lists what a drawing offers to vary', () => {
-    const offered = describeVariations(demo('lid-press-relay-control'));
+    const offered = describeVariations(demoDocument('lid-press-relay-control'));
     expect(offered.map((v) => [v.tag, v.kinds])).toEqual([
       ['0Z1', ['supply-loss']],
       ['G1', ['power-loss']],
@@ -127,7 +120,7 @@ describe('proof search', () => {
   });
 
   it('covers 4 variations × 8 quanta of the relay-controlled press, and finds the one rule that breaks', async () => {
-    const document = demo('lid-press-relay-control');
+    const document = demoDocument('lid-press-relay-control');
     const estopHolds: SearchCheck = (trace) => {
       const struck = signal(trace, 'estop:operated')!.values;
       const coil = signal(trace, 'm1:energised')!.values;
