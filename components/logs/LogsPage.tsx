@@ -25,7 +25,7 @@ type Tab = 'columns' | 'replay' | 'faults';
 type SortKey = 'createdAt' | 'fileName' | 'sizeBytes';
 
 /** Bytes as a person reads them. */
-export function sizeText(bytes: number): string {
+function sizeText(bytes: number): string {
   if (bytes < 1024) return `${bytes} B`;
   if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(1)} KiB`;
   return `${(bytes / 1024 / 1024).toFixed(1)} MiB`;

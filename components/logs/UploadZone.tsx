@@ -8,7 +8,7 @@ import { uploadLog, type UploadSummary } from './logs-api';
 const MIB = 1024 * 1024;
 
 /** What is wrong with a file before it is sent: its name or its size (the server checks both again, and the content). */
-export function fileProblem(file: { name: string; size: number }): string | null {
+function fileProblem(file: { name: string; size: number }): string | null {
   if (logFormatFromName(file.name) === null) return `${file.name}: a field log must end in ${LOG_EXTENSIONS.join(', ')}.`;
   if (file.size === 0) return `${file.name} is empty.`;
   if (file.size > MAX_LOG_BYTES) return `${file.name} is ${(file.size / MIB).toFixed(1)} MiB; a log may be at most ${MAX_LOG_BYTES / MIB} MiB.`;

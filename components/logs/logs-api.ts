@@ -36,16 +36,6 @@ export const fetchFaultSearch = (searchId: string, signal: AbortSignal) => reque
 export const startFaultSearch = (logId: string) => sendJson<{ id: string }>('POST', `${logBase(logId)}/fault-searches`);
 export const cancelFaultSearch = (searchId: string) => sendJson<FaultSearchDetail>('POST', `/api/fault-searches/${encodeURIComponent(searchId)}/cancel`);
 
-/** An upload refused by the server, with its message (and field) as the API gave it. */
-export class UploadRefused extends Error {
-  constructor(
-    message: string,
-    readonly status: number,
-  ) {
-    super(message);
-  }
-}
-
 /**
  * Sends a log file as the request body, reporting the share sent as it goes (fetch cannot tell
  * upload progress; XMLHttpRequest can).
@@ -69,10 +59,10 @@ export function uploadLog(circuitId: string, file: File, onProgress: (share: num
       if (xhr.status >= 200 && xhr.status < 300 && body) resolve(body as UploadSummary);
       else {
         const message = (body as { error?: { message?: string } } | null)?.error?.message ?? `The server answered with status ${xhr.status}.`;
-        reject(new UploadRefused(message, xhr.status));
+        reject(new Error(message));
       }
     };
-    xhr.onerror = () => reject(new UploadRefused('Could not reach the server. Check the connection and try again.', 0));
+    xhr.onerror = () => reject(new Error('Could not reach the server. Check the connection and try again.'));
     xhr.send(file);
   });
 }

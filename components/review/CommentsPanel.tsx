@@ -11,7 +11,7 @@ import type { CircuitDocument } from '@/engine/document/schema';
 import { editComment, fetchComments, postComment, reviewKeys, setCommentResolved, type CommentAnchor, type CommentReply, type CommentThread } from './review-api';
 
 /** The words for where a thread is pinned, with the part's tag where the drawing has it. */
-export function anchorLabel(anchor: CommentAnchor, document: CircuitDocument): string {
+function anchorLabel(anchor: CommentAnchor, document: CircuitDocument): string {
   switch (anchor.kind) {
     case 'circuit':
       return 'the whole circuit';

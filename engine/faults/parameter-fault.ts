@@ -37,7 +37,7 @@ export function numberParameterFault(def: {
 }
 
 /** The range of an on-off fault: 1 is the fault, 0 is healthy. */
-export const ON_OFF: SeverityRange = { min: 1, max: 1, unit: '', label: 'present', healthy: 0 };
+const ON_OFF: SeverityRange = { min: 1, max: 1, unit: '', label: 'present', healthy: 0 };
 
 /**
  * A fault that scales number parameters of a component down from the drawing's values: the

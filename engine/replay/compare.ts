@@ -272,7 +272,7 @@ function nearestIndex(time: readonly number[], t: number): number {
  * few ms, so a pressure rising through 3 bar in 20 ms would otherwise read as bars apart; the same
  * window as for edges keeps a timing offset from counting twice, once as time and once as value.
  */
-export function offBand(time: readonly number[], values: readonly number[], t: number, windowS: number, recorded: number): number {
+function offBand(time: readonly number[], values: readonly number[], t: number, windowS: number, recorded: number): number {
   let low = Math.min(interpolate(time, values, t - windowS), interpolate(time, values, t + windowS));
   let high = Math.max(interpolate(time, values, t - windowS), interpolate(time, values, t + windowS));
   for (let k = nearestIndex(time, t - windowS); k < time.length && time[k]! <= t + windowS; k += 1) {

@@ -76,7 +76,7 @@ export function applyMapping(table: LogTable, mapping: ColumnMapping, { ambientP
 const TIME_FORMAT_WORDS = { seconds: 'seconds', milliseconds: 'milliseconds', iso8601: 'ISO 8601 (2026-11-28T14:03:12.250Z)' } as const;
 
 /** A reading in SI: Pa absolute for pressures, m for positions. */
-export function toSi(value: number | null, unit: LogUnit | undefined, ambientPa: number): number | null {
+function toSi(value: number | null, unit: LogUnit | undefined, ambientPa: number): number | null {
   if (value === null) return null;
   switch (unit) {
     case 'bar-gauge':

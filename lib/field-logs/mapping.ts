@@ -6,8 +6,8 @@ import type { LogTable } from './types';
 export const LOG_UNITS = ['bar-gauge', 'bar-absolute', 'kPa-gauge', 'Pa-absolute', 'psi-gauge', 'mm', 'm'] as const;
 export type LogUnit = (typeof LOG_UNITS)[number];
 
-export const PRESSURE_UNITS: ReadonlySet<LogUnit> = new Set(['bar-gauge', 'bar-absolute', 'kPa-gauge', 'Pa-absolute', 'psi-gauge']);
-export const LENGTH_UNITS: ReadonlySet<LogUnit> = new Set(['mm', 'm']);
+const PRESSURE_UNITS: ReadonlySet<LogUnit> = new Set(['bar-gauge', 'bar-absolute', 'kPa-gauge', 'Pa-absolute', 'psi-gauge']);
+const LENGTH_UNITS: ReadonlySet<LogUnit> = new Set(['mm', 'm']);
 
 /** 'number' for `pressure:<port>` and `position`, 'state' for every state word. */
 export function kindOfWord(word: string): 'state' | 'number' {

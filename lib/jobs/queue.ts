@@ -38,7 +38,7 @@ async function startBoss(): Promise<PgBoss> {
 }
 
 /** The one pg-boss of this process against DATABASE_URL, started (and its schema installed) on first use. */
-export function getBoss(): Promise<PgBoss> {
+function getBoss(): Promise<PgBoss> {
   holder.airproofBoss ??= startBoss().catch((error: unknown) => {
     // A failed start is not kept, so the next call tries again once the database answers.
     holder.airproofBoss = undefined;

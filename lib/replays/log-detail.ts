@@ -8,7 +8,7 @@ import { parsedLogOf, recordedLogFrom } from '@/lib/replays/recorded-log';
 import { findLogUpload, uploadSummary, type UploadSummary } from '@/lib/uploads/uploads';
 
 /** Rows of a log shown before it is mapped. */
-export const PREVIEW_ROWS = 20;
+const PREVIEW_ROWS = 20;
 
 export interface LogPreview {
   format: LogFormat;

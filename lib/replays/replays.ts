@@ -16,7 +16,7 @@ import { findLogUpload } from '@/lib/uploads/uploads';
 import { CircuitRevision, Run, User } from '@/models';
 
 /** Longest log replayed while the caller waits, s: a minute or two of machine time simulates in a few seconds. */
-export const SYNCHRONOUS_REPLAY_MAX_S = 120;
+const SYNCHRONOUS_REPLAY_MAX_S = 120;
 
 /** What a replay run's summary holds: the trace figures the run routes read, the log it replays, and the comparison. */
 export interface ReplayRunSummary {

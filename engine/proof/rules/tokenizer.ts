@@ -38,7 +38,7 @@ export const KEYWORDS: ReadonlySet<string> = new Set([
   'angle',
 ]);
 
-export const UNITS: ReadonlySet<string> = new Set(['s', 'ms', 'mm', 'mm/s', 'deg', 'deg/s', 'bar']);
+const UNITS: ReadonlySet<string> = new Set(['s', 'ms', 'mm', 'mm/s', 'deg', 'deg/s', 'bar']);
 
 /** Tags as the trade writes them (1A1, K1.1, 0Z1, S-3); numbers are told apart by their shape. */
 const RUN = /[A-Za-z0-9][A-Za-z0-9._-]*/y;
