@@ -85,7 +85,7 @@ export function LogsPage({ circuitId }: { circuitId: string }) {
           <div className="h-[22rem] overflow-hidden rounded-lg border border-rule bg-paper-raised">
             <RevisionDrawing document={document} frame={frame} />
           </div>
-          {opened ? <OpenedLog key={opened} logId={opened} circuitId={circuitId} document={document} onFrame={setFrame} /> : <p className="text-sm text-ink-soft">Upload a log to begin.</p>}
+          {opened ? <OpenedLog key={opened} logId={opened} document={document} onFrame={setFrame} /> : <p className="text-sm text-ink-soft">Upload a log to begin.</p>}
         </section>
       </div>
     </div>
@@ -154,7 +154,7 @@ function LogTable({ items, opened, onOpen, circuitId }: { items: UploadSummary[]
   );
 }
 
-function OpenedLog({ logId, circuitId, document, onFrame }: { logId: string; circuitId: string; document: CircuitDocument; onFrame: (frame: RunFrame | null) => void }) {
+function OpenedLog({ logId, document, onFrame }: { logId: string; document: CircuitDocument; onFrame: (frame: RunFrame | null) => void }) {
   const log = useQuery({ queryKey: logKeys.log(logId), queryFn: ({ signal }) => fetchLog(logId, signal) });
   const [tab, setTab] = useState<Tab | null>(null);
   if (log.isError) return <FormAlert tone="error">{log.error.message}</FormAlert>;
@@ -190,7 +190,7 @@ function OpenedLog({ logId, circuitId, document, onFrame }: { logId: string; cir
             label="Field log"
             testIdPrefix="log-tab"
           />
-          {current === 'columns' ? <MappingForm circuitId={circuitId} log={detail} document={document} onSaved={() => setTab('replay')} /> : null}
+          {current === 'columns' ? <MappingForm log={detail} document={document} onSaved={() => setTab('replay')} /> : null}
           {current === 'replay' ? <ReplayView log={detail} document={document} onFrame={onFrame} /> : null}
           {current === 'faults' ? <FaultSearchPanel log={detail} /> : null}
         </>

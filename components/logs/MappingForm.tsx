@@ -1,6 +1,6 @@
 'use client';
 
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { ApiError } from '@/components/api/api-error';
 import { FormAlert } from '@/components/forms/FormAlert';
@@ -10,7 +10,7 @@ import type { CircuitDocument } from '@/engine/document/schema';
 import { ruleVocabulary } from '@/engine/proof/rules';
 import { columnMappingSchema, LOG_UNITS, type ColumnMapping, type LogUnit, type MappedColumn } from '@/lib/field-logs';
 import { kindOfWord } from '@/lib/field-logs/mapping';
-import { fetchMappings, logKeys, saveMapping, type UploadDetail } from './logs-api';
+import { logKeys, saveMapping, type UploadDetail } from './logs-api';
 
 const UNIT_LABEL: Record<LogUnit, string> = {
   'bar-gauge': 'bar (gauge)',
@@ -34,14 +34,14 @@ function wordsOf(entry: { words: string[]; ports: string[]; type: string } | und
  * compared), and the unit of a measured value. Starts from a saved mapping, a suggestion from the
  * column names, or what was saved for this log; the server checks the whole file against it.
  */
-export function MappingForm({ circuitId, log, document, onSaved }: { circuitId: string; log: UploadDetail; document: CircuitDocument; onSaved: () => void }) {
+export function MappingForm({ log, document, onSaved }: { log: UploadDetail; document: CircuitDocument; onSaved: () => void }) {
   const queryClient = useQueryClient();
   const canEdit = useCan('replay:run');
   const preview = log.preview!;
   const vocabulary = useMemo(() => ruleVocabulary(document), [document]);
   const byTag = useMemo(() => new Map(vocabulary.map((v) => [v.tag, v])), [vocabulary]);
-  const saved = useQuery({ queryKey: logKeys.mappings(circuitId), queryFn: ({ signal }) => fetchMappings(circuitId, signal) });
-  const fitting = (saved.data?.items ?? []).filter((m) => m.columnsSignature === log.columnsSignature && m.uploadId !== log.id);
+  // The server sends the mappings saved for the circuit's other logs with the same columns.
+  const fitting = log.reusableMappings;
   const [mapping, setMapping] = useState<ColumnMapping>(() => log.mapping?.mapping ?? withEveryColumn(preview.suggestedMapping, preview.columns));
   const [name, setName] = useState(log.mapping?.name ?? log.fileName.replace(/\.[^.]+$/, ''));
   const checked = columnMappingSchema.safeParse(mapping);
@@ -52,7 +52,6 @@ export function MappingForm({ circuitId, log, document, onSaved }: { circuitId: 
     mutationFn: () => saveMapping(log.id, { name: name.trim(), mapping, revision: log.mapping?.revision ?? 0 }),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: logKeys.log(log.id) });
-      void queryClient.invalidateQueries({ queryKey: logKeys.mappings(circuitId) });
       onSaved();
     },
   });

@@ -16,7 +16,6 @@ export const logKeys = {
   logs: (circuitId: string, page: number) => ['circuits', circuitId, 'logs', page] as const,
   allLogs: (circuitId: string) => ['circuits', circuitId, 'logs'] as const,
   log: (logId: string) => ['logs', logId] as const,
-  mappings: (circuitId: string) => ['circuits', circuitId, 'log-mappings'] as const,
   searches: (logId: string) => ['logs', logId, 'fault-searches'] as const,
   search: (searchId: string) => ['fault-searches', searchId] as const,
 };
@@ -28,7 +27,6 @@ export const fetchLogs = (circuitId: string, page: number, signal: AbortSignal) 
 export const fetchLog = (logId: string, signal: AbortSignal) => requestJson<UploadDetail>(logBase(logId), signal);
 export const deleteLog = (logId: string) => sendJson<{ ok: true }>('DELETE', logBase(logId));
 export const logFileUrl = (logId: string) => `${logBase(logId)}/file`;
-export const fetchMappings = (circuitId: string, signal: AbortSignal) => requestJson<{ items: SavedMapping[] }>(`${circuitBase(circuitId)}/log-mappings`, signal);
 export const saveMapping = (logId: string, body: { name: string; mapping: ColumnMapping; revision: number }) => sendJson<SavedMapping>('PUT', `${logBase(logId)}/mapping`, body);
 export const replayLog = (logId: string) => sendJson<{ runId: string; comparison: Comparison }>('POST', `${logBase(logId)}/replay`);
 export const fetchFaultSearches = (logId: string, signal: AbortSignal) => requestJson<FaultSearchPage>(`${logBase(logId)}/fault-searches?page=1&pageSize=5`, signal);

@@ -1,6 +1,6 @@
 import 'server-only';
 import { createHash } from 'node:crypto';
-import { Op } from 'sequelize';
+import { Op, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
 import type { CircuitDocument } from '@/engine/document/schema';
 import { ruleVocabulary } from '@/engine/proof/rules';
@@ -132,11 +132,10 @@ export async function putLogMapping({ actor, uploadId, input }: { actor: Actor; 
   return savedMapping((await LogMapping.findByPk(id, { include: withUpdatedBy, rejectOnEmpty: true })) as LoadedMapping);
 }
 
-/** The circuit's mappings saved for other logs with the same columns, newest first: a new log can start from one. */
-export async function reusableMappings({ circuitId, uploadId, signature }: { circuitId: string; uploadId: string; signature: string }): Promise<SavedMapping[]> {
-  getSequelize();
+/** Saved mappings with who saved them, newest first. */
+async function savedMappingsWhere(where: WhereOptions<LogMapping>): Promise<SavedMapping[]> {
   const rows = (await LogMapping.findAll({
-    where: { circuitId, columnsSignature: signature, uploadId: { [Op.or]: [{ [Op.ne]: uploadId }, { [Op.is]: null }] } },
+    where,
     include: withUpdatedBy,
     order: [
       ['updatedAt', 'DESC'],
@@ -146,17 +145,15 @@ export async function reusableMappings({ circuitId, uploadId, signature }: { cir
   return rows.map(savedMapping);
 }
 
+/** The circuit's mappings saved for other logs with the same columns, newest first: a new log can start from one. */
+export async function reusableMappings({ circuitId, uploadId, signature }: { circuitId: string; uploadId: string; signature: string }): Promise<SavedMapping[]> {
+  getSequelize();
+  return savedMappingsWhere({ circuitId, columnsSignature: signature, uploadId: { [Op.or]: [{ [Op.ne]: uploadId }, { [Op.is]: null }] } });
+}
+
 /** A circuit's saved mappings, newest first; pick one whose `columnsSignature` matches a new log's to start from it. */
 export async function listLogMappings({ workspaceId, circuitId }: { workspaceId: string; circuitId: string }): Promise<SavedMapping[]> {
   getSequelize();
   await findCircuit({ workspaceId, circuitId });
-  const rows = (await LogMapping.findAll({
-    where: { circuitId },
-    include: withUpdatedBy,
-    order: [
-      ['updatedAt', 'DESC'],
-      ['id', 'ASC'],
-    ],
-  })) as LoadedMapping[];
-  return rows.map(savedMapping);
+  return savedMappingsWhere({ circuitId });
 }
