@@ -1,7 +1,7 @@
 'use client';
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { ApiError } from '@/components/api/api-error';
 import { ChangeTime } from '@/components/circuits/ChangeTime';
 import { FormAlert } from '@/components/forms/FormAlert';
@@ -218,12 +218,14 @@ function ProofView({ proofId, circuitId, onReplay }: { proofId: string; circuitI
     queryFn: ({ signal }) => fetchProof(proofId, signal),
     refetchInterval: (query) => (query.state.data && !isJobActive(query.state.data.status) ? false : JOB_POLL_MS),
   });
+  const status = proof.data?.status;
+  // The list of earlier searches shows this one's state too: it follows each change of state.
+  useEffect(() => {
+    if (status) void queryClient.invalidateQueries({ queryKey: proofKeys.allProofs(circuitId) });
+  }, [queryClient, circuitId, status]);
   const cancel = useMutation({
     mutationFn: () => cancelProof(proofId),
-    onSuccess: (detail) => {
-      queryClient.setQueryData(proofKeys.proof(proofId), detail);
-      void queryClient.invalidateQueries({ queryKey: proofKeys.allProofs(circuitId) });
-    },
+    onSuccess: (detail) => queryClient.setQueryData(proofKeys.proof(proofId), detail),
   });
   if (proof.isError) return <FormAlert tone="error">{proof.error.message}</FormAlert>;
   if (!proof.data) return <p className="text-sm text-ink-soft">Loading the search…</p>;
