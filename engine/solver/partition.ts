@@ -675,9 +675,6 @@ export class Partition {
     const volume = this.w.volume;
     const massPerVolume = this.absTolMassPerVolume;
     for (let i = 0; i < this.nMass; i += 1) massScaleOf[i] = massPerVolume * volume[this.freeNodeIndex[i]!]!;
-    // The stage vectors u1…u4 and the error live in the LU's elimination order (entry k belongs
-    // to state perm[k]), so the solves need no reordering; y and f keep the partition's order.
-    const perm = this.lu.perm;
     const lu = this.lu;
     const u1 = this.u1;
     const u2 = this.u2;
@@ -686,41 +683,40 @@ export class Partition {
     const yStage = this.stage;
     const fStage = this.fStage;
     const f0 = this.f;
-    for (let k = 0; k < n; k += 1) u1[k] = gh * f0[perm[k]!]!;
-    lu.solveOrdered(u1);
-    for (let k = 0; k < n; k += 1) yStage[perm[k]!] = y0[perm[k]!]! + A21 * u1[k]!;
+    for (let i = 0; i < n; i += 1) u1[i] = gh * f0[i]!;
+    lu.solve(u1);
+    for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A21 * u1[i]!;
     this.writePositions(yStage);
     if (!this.evaluate(yStage, fStage, false)) return -1;
-    for (let k = 0; k < n; k += 1) u2[k] = gh * fStage[perm[k]!]! + C21 * u1[k]!;
-    lu.solveOrdered(u2);
-    for (let k = 0; k < n; k += 1) yStage[perm[k]!] = y0[perm[k]!]! + A31 * u1[k]! + A32 * u2[k]!;
+    for (let i = 0; i < n; i += 1) u2[i] = gh * fStage[i]! + C21 * u1[i]!;
+    lu.solve(u2);
+    for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A31 * u1[i]! + A32 * u2[i]!;
     this.writePositions(yStage);
     if (!this.evaluate(yStage, fStage, false)) return -1;
-    for (let k = 0; k < n; k += 1) u3[k] = gh * fStage[perm[k]!]! + C31 * u1[k]! + C32 * u2[k]!;
-    lu.solveOrdered(u3);
-    for (let k = 0; k < n; k += 1) yStage[perm[k]!] = y0[perm[k]!]! + A41 * u1[k]! + A42 * u2[k]! + A43 * u3[k]!;
+    for (let i = 0; i < n; i += 1) u3[i] = gh * fStage[i]! + C31 * u1[i]! + C32 * u2[i]!;
+    lu.solve(u3);
+    for (let i = 0; i < n; i += 1) yStage[i] = y0[i]! + A41 * u1[i]! + A42 * u2[i]! + A43 * u3[i]!;
     this.writePositions(yStage);
     if (!this.evaluate(yStage, fStage, false)) return -1;
-    for (let k = 0; k < n; k += 1) u4[k] = gh * fStage[perm[k]!]! + C41 * u1[k]! + C42 * u2[k]! + C43 * u3[k]!;
-    lu.solveOrdered(u4);
+    for (let i = 0; i < n; i += 1) u4[i] = gh * fStage[i]! + C41 * u1[i]! + C42 * u2[i]! + C43 * u3[i]!;
+    lu.solve(u4);
     const yNew = this.candidate;
     const err = this.errVec;
-    for (let k = 0; k < n; k += 1) {
-      yNew[perm[k]!] = y0[perm[k]!]! + M1 * u1[k]! + M2 * u2[k]! + M3 * u3[k]! + M4 * u4[k]!;
-      err[k] = E1 * u1[k]! + E2 * u2[k]! + E3 * u3[k]! + E4 * u4[k]!;
+    for (let i = 0; i < n; i += 1) {
+      yNew[i] = y0[i]! + M1 * u1[i]! + M2 * u2[i]! + M3 * u3[i]! + M4 * u4[i]!;
+      err[i] = E1 * u1[i]! + E2 * u2[i]! + E3 * u3[i]! + E4 * u4[i]!;
     }
-    if (FILTER_ERROR) lu.solveOrdered(err);
+    if (FILTER_ERROR) lu.solve(err);
     let errSq = 0;
     let counted = 0;
     const firstPiston = this.nMass + this.spec.fixedNodes.length;
-    for (let k = 0; k < n; k += 1) {
-      const i = perm[k]!;
+    for (let i = 0; i < n; i += 1) {
       const magnitude = Math.max(Math.abs(y0[i]!), Math.abs(yNew[i]!));
       let scale: number;
       if (i < this.nMass) scale = this.massScaleOf[i]! + this.tol.relTol * magnitude;
       else if (i < firstPiston) continue;
       else scale = ((i - firstPiston) % 2 === 0 ? POSITION_TOLERANCE_M : VELOCITY_TOLERANCE_M_PER_S) + this.tol.relTol * magnitude;
-      const ei = err[k]! / scale;
+      const ei = err[i]! / scale;
       errSq += ei * ei;
       counted += 1;
     }

@@ -28,7 +28,25 @@ interface Symbolic {
   /** Update triples: target slot, lower slot, upper slot. */
   readonly updates: Int32Array;
   readonly slots: number;
+  /** factor() and solve() for this pattern. */
+  readonly kernels: Kernels;
 }
+
+/**
+ * The numeric work on one pattern: factorise the values in place (keeping 1 / pivot), and solve
+ * in place on a right-hand side given and returned in the original order.
+ */
+interface Kernels {
+  readonly form: 'straight-line' | 'loops';
+  factor(values: Float64Array, inversePivot: Float64Array): void;
+  solve(b: Float64Array, values: Float64Array, inversePivot: Float64Array): void;
+}
+
+/**
+ * Beyond this many stored entries a pattern keeps the loops: straight-line code grows with the
+ * number of updates, and a partition that large is not one of the small repeated ones it pays for.
+ */
+const STRAIGHT_LINE_SLOT_LIMIT = 4000;
 
 /** Patterns analysed so far; bounded so that a long-lived worker editing many circuits does not grow without end. */
 const symbolicCache = new Map<string, Symbolic>();
@@ -117,7 +135,85 @@ function analyse(size: number, pattern: ReadonlyArray<readonly [number, number]>
     flatLow.set(lowSlots[k]!, ptr[k]!);
     flatUp.set(upSlots[k]!, ptr[k]!);
   }
-  return { size, perm, inv, slotOf, diagSlot, ptr, flatIndex, flatLow, flatUp, updates: Int32Array.from(triples), slots };
+  const updates = Int32Array.from(triples);
+  const lists = { size, perm, ptr, flatIndex, flatLow, flatUp, updates, diagSlot };
+  const kernels = (slots <= STRAIGHT_LINE_SLOT_LIMIT && straightLineKernels(lists)) || loopKernels(lists);
+  return { size, perm, inv, slotOf, diagSlot, ptr, flatIndex, flatLow, flatUp, updates, slots, kernels };
+}
+
+type Lists = Pick<Symbolic, 'size' | 'perm' | 'ptr' | 'flatIndex' | 'flatLow' | 'flatUp' | 'updates' | 'diagSlot'>;
+
+/**
+ * The factorisation and the solves written out for one pattern, every slot and index a constant
+ * and the right-hand side held in locals: the solver refactorises and solves small systems of the
+ * same few shapes millions of times, and the loops' index loads and bookkeeping cost about twice
+ * the arithmetic (a third of the time, measured by scripts/bench-engine.ts). The operations and
+ * their order are those of loopKernels, so both give the same results bit for bit. Null where the
+ * platform forbids compiling code at run time (a strict content security policy).
+ */
+function straightLineKernels(l: Lists): Kernels | null {
+  const n = l.size;
+  const factor: string[] = [];
+  let u = 0;
+  for (let k = 0; k < n; k += 1) {
+    factor.push(`const p${k} = 1 / v[${l.diagSlot[k]}]; ip[${k}] = p${k};`);
+    for (let a = l.ptr[k]!; a < l.ptr[k + 1]!; a += 1) factor.push(`v[${l.flatLow[a]}] = v[${l.flatLow[a]}] * p${k};`);
+    const end = u + 3 * (l.ptr[k + 1]! - l.ptr[k]!) ** 2;
+    for (; u < end; u += 3) factor.push(`v[${l.updates[u]}] = v[${l.updates[u]}] - v[${l.updates[u + 1]}] * v[${l.updates[u + 2]}];`);
+  }
+  const solve: string[] = [];
+  for (let k = 0; k < n; k += 1) solve.push(`let w${k} = b[${l.perm[k]}];`);
+  for (let k = 0; k < n; k += 1) {
+    for (let a = l.ptr[k]!; a < l.ptr[k + 1]!; a += 1) solve.push(`w${l.flatIndex[a]} = w${l.flatIndex[a]} - v[${l.flatLow[a]}] * w${k};`);
+  }
+  for (let k = n - 1; k >= 0; k -= 1) {
+    let sum = `w${k}`;
+    for (let c = l.ptr[k]!; c < l.ptr[k + 1]!; c += 1) sum += ` - v[${l.flatUp[c]}] * w${l.flatIndex[c]}`;
+    solve.push(`w${k} = (${sum}) * ip[${k}]; b[${l.perm[k]}] = w${k};`);
+  }
+  try {
+    return {
+      form: 'straight-line',
+      factor: new Function('v', 'ip', factor.join('\n')) as Kernels['factor'],
+      solve: new Function('b', 'v', 'ip', solve.join('\n')) as Kernels['solve'],
+    };
+  } catch {
+    return null;
+  }
+}
+
+/** The same work as loops over the slot lists. */
+function loopKernels(l: Lists): Kernels {
+  const { size, perm, ptr, flatIndex: index, flatLow: low, flatUp: up, updates, diagSlot: diag } = l;
+  const w = new Float64Array(size);
+  return {
+    form: 'loops',
+    factor(v, inversePivot) {
+      let u = 0;
+      for (let k = 0; k < size; k += 1) {
+        const inverse = 1 / v[diag[k]!]!;
+        inversePivot[k] = inverse;
+        const from = ptr[k]!;
+        const to = ptr[k + 1]!;
+        for (let a = from; a < to; a += 1) v[low[a]!] = v[low[a]!]! * inverse;
+        const end = u + 3 * (to - from) * (to - from);
+        for (; u < end; u += 3) v[updates[u]!] = v[updates[u]!]! - v[updates[u + 1]!]! * v[updates[u + 2]!]!;
+      }
+    },
+    solve(b, v, inversePivot) {
+      for (let k = 0; k < size; k += 1) w[k] = b[perm[k]!]!;
+      for (let k = 0; k < size; k += 1) {
+        const wk = w[k]!;
+        for (let a = ptr[k]!, to = ptr[k + 1]!; a < to; a += 1) w[index[a]!] = w[index[a]!]! - v[low[a]!]! * wk;
+      }
+      for (let k = size - 1; k >= 0; k -= 1) {
+        let sum = w[k]!;
+        for (let c = ptr[k]!, to = ptr[k + 1]!; c < to; c += 1) sum -= v[up[c]!]! * w[index[c]!]!;
+        w[k] = sum * inversePivot[k]!;
+        b[perm[k]!] = w[k]!;
+      }
+    },
+  };
 }
 
 export class SparseLu {
@@ -128,28 +224,24 @@ export class SparseLu {
   readonly perm: Int32Array;
   private readonly inv: Int32Array;
   private readonly slotOf: ReadonlyMap<number, number>;
-  private readonly diagSlot: Int32Array;
-  private readonly ptr: Int32Array;
-  private readonly flatIndex: Int32Array;
-  private readonly flatLow: Int32Array;
-  private readonly flatUp: Int32Array;
-  private readonly updates: Int32Array;
+  private readonly kernels: Kernels;
+  /** Which form the numeric work takes here. */
+  readonly form: 'straight-line' | 'loops';
   /** 1 / pivot of each order position, kept by factor() so that the solves multiply instead of dividing. */
   private readonly inversePivot: Float64Array;
 
-  /** `pattern` lists the off-diagonal (row, column) pairs that can be non-zero, in original indices. */
-  constructor(size: number, pattern: ReadonlyArray<readonly [number, number]>) {
+  /**
+   * `pattern` lists the off-diagonal (row, column) pairs that can be non-zero, in original
+   * indices. `loops` keeps the loop form of the numeric work (the tests compare the two).
+   */
+  constructor(size: number, pattern: ReadonlyArray<readonly [number, number]>, options: { loops?: boolean } = {}) {
     const symbolic = symbolicOf(size, pattern);
     this.size = size;
     this.perm = symbolic.perm;
     this.inv = symbolic.inv;
     this.slotOf = symbolic.slotOf;
-    this.diagSlot = symbolic.diagSlot;
-    this.ptr = symbolic.ptr;
-    this.flatIndex = symbolic.flatIndex;
-    this.flatLow = symbolic.flatLow;
-    this.flatUp = symbolic.flatUp;
-    this.updates = symbolic.updates;
+    this.kernels = options.loops ? loopKernels(symbolic) : symbolic.kernels;
+    this.form = options.loops ? 'loops' : symbolic.kernels.form;
     this.values = new Float64Array(symbolic.slots);
     this.inversePivot = new Float64Array(size);
   }
@@ -161,46 +253,12 @@ export class SparseLu {
 
   /** Factorises the current values in place. */
   factor(): void {
-    const v = this.values;
-    const updates = this.updates;
-    const ptr = this.ptr;
-    const flatLow = this.flatLow;
-    const diag = this.diagSlot;
-    const inversePivot = this.inversePivot;
-    let u = 0;
-    for (let k = 0; k < this.size; k += 1) {
-      const inverse = 1 / v[diag[k]!]!;
-      inversePivot[k] = inverse;
-      const from = ptr[k]!;
-      const to = ptr[k + 1]!;
-      for (let a = from; a < to; a += 1) v[flatLow[a]!] = v[flatLow[a]!]! * inverse;
-      const end = u + 3 * (to - from) * (to - from);
-      for (; u < end; u += 3) v[updates[u]!] = v[updates[u]!]! - v[updates[u + 1]!]! * v[updates[u + 2]!]!;
-    }
+    this.kernels.factor(this.values, this.inversePivot);
   }
 
-  /**
-   * Solves (LU) x = b in place on b given in elimination order (entry k belongs to original
-   * index perm[k]): for callers that keep their vectors in that order and save the reordering.
-   */
-  solveOrdered(w: Float64Array): void {
-    const v = this.values;
-    const ptr = this.ptr;
-    const index = this.flatIndex;
-    const low = this.flatLow;
-    const up = this.flatUp;
-    const inversePivot = this.inversePivot;
-    const size = this.size;
-    for (let k = 0; k < size; k += 1) {
-      const wk = w[k]!;
-      if (wk === 0) continue;
-      for (let a = ptr[k]!, to = ptr[k + 1]!; a < to; a += 1) w[index[a]!] = w[index[a]!]! - v[low[a]!]! * wk;
-    }
-    for (let k = size - 1; k >= 0; k -= 1) {
-      let sum = w[k]!;
-      for (let c = ptr[k]!, to = ptr[k + 1]!; c < to; c += 1) sum -= v[up[c]!]! * w[index[c]!]!;
-      w[k] = sum * inversePivot[k]!;
-    }
+  /** Solves (LU) x = b in place (b and x in the original order). */
+  solve(b: Float64Array): void {
+    this.kernels.solve(b, this.values, this.inversePivot);
   }
 }
 
