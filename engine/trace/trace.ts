@@ -41,6 +41,7 @@ export interface Trace {
 /** Where samples go while a simulation runs; the browser, server and tests each bring their own. */
 export interface TraceSink {
   begin(signals: ReadonlyArray<{ name: string; unit: SignalUnit }>): void;
+  /** One row: `values` holds exactly one value per signal, in the order `begin` gave them. */
   sample(t: number, values: Float64Array): void;
   event(event: TraceEvent): void;
 }
@@ -61,7 +62,8 @@ export class MemoryTraceSink implements TraceSink {
     const width = this.names.length;
     const row = this.time.length % ROWS_PER_BLOCK;
     if (row === 0) this.blocks.push(new Float64Array(ROWS_PER_BLOCK * width));
-    this.blocks[this.blocks.length - 1]!.set(values.subarray(0, width), row * width);
+    if (values.length !== width) throw new RangeError(`a trace row has one value per signal (${width}), got ${values.length}`);
+    this.blocks[this.blocks.length - 1]!.set(values, row * width);
     this.time.push(t);
   }
 
