@@ -220,6 +220,52 @@ export function signedIsoFlowPrepared(gain: number, b: number, m: number, pa: nu
   return forward ? flow : -flow;
 }
 
+/**
+ * The flow law of {@link signedIsoFlowPrepared} (or, with `dPa` and `dPb`, of
+ * {@link signedIsoFlowPreparedInto}) with m = 0.5, as JavaScript statements: the solver writes a
+ * partition's right-hand side out as straight-line code, where calls would not be inlined. The
+ * statements read the expressions named for the gain, pa, pb, b, 1 − b and φ(1 − ε) and set the
+ * variables named `flow` (and `dPa`, `dPb`), which the caller declares; ε is a literal. The
+ * operations and their order are those of the functions, so the results are the same bit for bit
+ * (tests/engine/calc/iso-flow-source.test.ts compares them).
+ */
+export function isoFlowSource(
+  names: { gain: string; pa: string; pb: string; b: string; oneMinusB: string; linearPhi: string; flow: string; dPa?: string; dPb?: string },
+  epsilon: number,
+): string {
+  const { gain, pa, pb, b, oneMinusB, linearPhi, flow, dPa, dPb } = names;
+  const derivatives = dPa !== undefined && dPb !== undefined;
+  const lines = [
+    '{',
+    `const forward = ${pa} >= ${pb};`,
+    `const p1 = forward ? ${pa} : ${pb};`,
+    `const p2 = forward ? ${pb} : ${pa};`,
+    derivatives ? 'let q = 0; let d1 = 0; let d2 = 0;' : 'let q = 0;',
+    `if (p1 > 0 && ${gain} > 0) {`,
+    'const r = p2 / p1;',
+    `if (r > ${String(1 - epsilon)}) {`,
+    derivatives
+      ? `const slope = (${gain} * ${linearPhi}) / ${String(epsilon)}; q = slope * (p1 - p2); d1 = slope; d2 = -slope;`
+      : `q = ((${gain} * ${linearPhi}) / ${String(epsilon)}) * (p1 - p2);`,
+    `} else if (r <= ${b}) {`,
+    derivatives ? `q = ${gain} * p1; d1 = ${gain};` : `q = ${gain} * p1;`,
+    '} else {',
+    `const x = (r - ${b}) / ${oneMinusB};`,
+    'const u = 1 - x * x;',
+    'const phi = Math.sqrt(u);',
+    derivatives
+      ? `const dPhi = ((0.5 * phi) / u) * ((-2 * x) / ${oneMinusB}); q = ${gain} * p1 * phi; d1 = ${gain} * (phi - r * dPhi); d2 = ${gain} * dPhi;`
+      : `q = ${gain} * p1 * phi;`,
+    '}',
+    '}',
+    derivatives
+      ? `if (forward) { ${flow} = q; ${dPa} = d1; ${dPb} = d2; } else { ${flow} = -q; ${dPa} = -d2; ${dPb} = -d1; }`
+      : `${flow} = forward ? q : -q;`,
+    '}',
+  ];
+  return lines.join('\n');
+}
+
 /** Value of {@link isoMassFlowSmoothWithDerivatives} only, kg/s. */
 export function isoMassFlowSmooth(input: IsoFlowInput, epsilon: number = ISO_LINEAR_REGION_EPSILON): number {
   return isoMassFlowSmoothWithDerivatives(input, epsilon).flow;

@@ -1,4 +1,5 @@
 import { ISO_LINEAR_REGION_EPSILON, isoLinearRegionPhi, signedIsoFlowPrepared, signedIsoFlowPreparedInto } from '../calc/iso6358';
+import { type RightHandSide, type RightHandSideShape, straightLineRightHandSide } from './right-hand-side';
 import { SparseLu } from './sparse-lu';
 import { flags, floats, ints } from './typed-arrays';
 import type { World } from './world';
@@ -183,6 +184,8 @@ export class Partition {
   private activeStale = true;
   private readonly scratch = { flow: 0, dFlowdPa: 0, dFlowdPb: 0 };
   private readonly lu: SparseLu;
+  /** The right-hand side written out for this partition; null keeps the loop form (evaluate). */
+  private readonly rightHandSide: RightHandSide | null;
   /** Where each Jacobian term goes in the LU's value array, flattened per restriction (4), coupling (2), modulator (2) and piston (5). */
   private readonly slots: {
     diag: Int32Array;
@@ -234,7 +237,8 @@ export class Partition {
   /** A boundary pressure that its guards read has just changed. */
   boundaryChanged = false;
 
-  constructor(world: World, spec: PartitionSpec, tol: Tolerances, guardSource: GuardSource) {
+  /** `straightLine: false` keeps the loop forms of the right-hand side and the LU (the tests compare the two). */
+  constructor(world: World, spec: PartitionSpec, tol: Tolerances, guardSource: GuardSource, { straightLine = true }: { straightLine?: boolean } = {}) {
     this.w = world;
     this.spec = spec;
     this.tol = tol;
@@ -312,9 +316,10 @@ export class Partition {
     spec.freeNodes.forEach((node, i) => (this.y[i] = (world.pressure[node]! * this.freeNodeVolume(i)) / world.rt));
     spec.pistons.forEach((k, j) => (this.y[this.xIndex[j]!] = world.position[k]!));
     this.quiescent = n === 0;
-    const built = this.buildPattern();
+    const built = this.buildPattern(!straightLine);
     this.lu = built.lu;
     this.slots = built.slots;
+    this.rightHandSide = straightLine ? straightLineRightHandSide(this.shape()) : null;
   }
 
   /** Mass in the partition's nodes plus what its boundaries have received, kg (constant up to round-off). */
@@ -755,6 +760,11 @@ export class Partition {
    * Jacobian is assembled at the state a step ends on, which is evaluated with them.
    */
   private evaluate(y: Float64Array, f: Float64Array, derivatives: boolean): boolean {
+    if (this.rightHandSide) {
+      if (this.activeStale) this.findActive();
+      const rhs = this.rightHandSide;
+      return derivatives ? rhs.withDerivatives(y, f, this.w, rhs.indices, rhs.numbers) : rhs.values(y, f, this.w, rhs.indices, rhs.numbers);
+    }
     const w = this.w;
     const pressure = w.pressure;
     let physical = true;
@@ -904,7 +914,40 @@ export class Partition {
 
   // ---- Jacobian -------------------------------------------------------------
 
-  private buildPattern(): { lu: SparseLu; slots: Partition['slots'] } {
+  /** The right-hand side's parts, for writing it out. */
+  private shape(): RightHandSideShape {
+    const w = this.w;
+    return {
+      nState: this.nState,
+      rt: w.rt,
+      ambientPa: w.model.ambientPa,
+      freeNodes: this.spec.freeNodes.map((node, i) => ({
+        node,
+        row: i,
+        baseVolume: this.nodeBaseVolume[i]!,
+        exponent: this.nodeExponent[i]!,
+        chambers: Array.from({ length: this.chamberStart[i + 1]! - this.chamberStart[i]! }, (_, n) => {
+          const c = this.chamberStart[i]! + n;
+          return { piston: this.chamberPiston[c]!, area: this.chamberArea[c]!, offset: this.chamberOffset[c]!, stroke: this.chamberStroke[c]! };
+        }),
+      })),
+      restrictions: this.spec.restrictions.map((r, j) => ({
+        r,
+        from: this.rFromNode[j]!,
+        to: this.rToNode[j]!,
+        rowFrom: this.rowFrom[j]!,
+        rowTo: this.rowTo[j]!,
+        critical: this.rCritical[j]!,
+        cracking: this.rCracking[j]!,
+        oneWay: this.rOneWay[j] === 1,
+        modulated: this.rModulated[j] === 1,
+        linearPhi: this.rLinearPhi[j]!,
+      })),
+      pistons: this.spec.pistons.map((k, j) => ({ k, x: this.xIndex[j]!, v: this.vIndex[j]! })),
+    };
+  }
+
+  private buildPattern(loops: boolean): { lu: SparseLu; slots: Partition['slots'] } {
     const { restrictions, pistons, nodes } = this.w.model;
     const local = (node: number) => this.localOfNode.get(node)!;
     const pistonLocal = new Map(this.spec.pistons.map((k, j) => [k, j]));
@@ -926,7 +969,7 @@ export class Partition {
       pairs.push([x, v], [v, local(p.capNode)], [v, x]);
       if (p.rodNode !== null) pairs.push([v, local(p.rodNode)]);
     });
-    const lu = new SparseLu(this.nState, pairs);
+    const lu = new SparseLu(this.nState, pairs, { loops });
     const diag = new Int32Array(this.nState);
     for (let i = 0; i < this.nState; i += 1) diag[i] = lu.slot(i, i);
     const restriction = Int32Array.from(

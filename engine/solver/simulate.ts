@@ -29,6 +29,12 @@ export interface SimulationOptions {
   maxStepS?: number;
   /** Record the mass flow through every passage (default true). */
   recordFlows?: boolean;
+  /**
+   * Write each partition's right-hand side and LU out as straight-line code (default true); false
+   * keeps the loop forms, which give the same trace bit for bit, slower. The loop forms are also
+   * what a platform that forbids compiling code at run time gets.
+   */
+  straightLine?: boolean;
 }
 
 /**
@@ -208,7 +214,7 @@ class Run implements GuardSource, OutputRows, SteppedSimulation {
     this.api = this.makeApi();
     const tol = { relTol: options.relTol ?? 1e-3, absTolPa: options.absTolPa ?? 200, maxStepS: options.maxStepS ?? 0.02 };
     const specs = buildPartitions(model, this.api);
-    this.partitions = specs.map((spec) => new Partition(this.w, spec, tol, this));
+    this.partitions = specs.map((spec) => new Partition(this.w, spec, tol, this, { straightLine: options.straightLine }));
     this.partitionOfRestriction = new Int32Array(model.restrictions.length).fill(-1);
     this.partitionOfPiston = new Int32Array(model.pistons.length).fill(-1);
     this.partitionOfFreeNode = new Int32Array(model.nodes.length).fill(-1);
