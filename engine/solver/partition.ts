@@ -1,4 +1,5 @@
 import { ISO_LINEAR_REGION_EPSILON, isoLinearRegionPhi, signedIsoFlowPrepared, signedIsoFlowPreparedInto } from '../calc/iso6358';
+import { type IterationMatrix, type IterationMatrixShape, straightLineIterationMatrix } from './iteration-matrix';
 import { type RightHandSide, type RightHandSideShape, straightLineRightHandSide } from './right-hand-side';
 import { SparseLu } from './sparse-lu';
 import { flags, floats, ints } from './typed-arrays';
@@ -186,6 +187,8 @@ export class Partition {
   private readonly lu: SparseLu;
   /** The right-hand side written out for this partition; null keeps the loop form (evaluate). */
   private readonly rightHandSide: RightHandSide | null;
+  /** W's assembly written out for this partition; null keeps the loop form (assembleW). */
+  private readonly iterationMatrix: IterationMatrix | null;
   /** Where each Jacobian term goes in the LU's value array, flattened per restriction (4), coupling (2), modulator (2) and piston (5). */
   private readonly slots: {
     diag: Int32Array;
@@ -320,6 +323,7 @@ export class Partition {
     this.lu = built.lu;
     this.slots = built.slots;
     this.rightHandSide = straightLine ? straightLineRightHandSide(this.shape()) : null;
+    this.iterationMatrix = straightLine ? straightLineIterationMatrix(this.matrixShape()) : null;
   }
 
   /** Mass in the partition's nodes plus what its boundaries have received, kg (constant up to round-off). */
@@ -947,6 +951,45 @@ export class Partition {
     };
   }
 
+  /** Where W's terms go and what they read, for writing its assembly out. */
+  private matrixShape(): IterationMatrixShape {
+    const slots = this.slots;
+    const restrictions = this.w.model.restrictions;
+    return {
+      slotCount: this.lu.values.length,
+      diagonal: slots.diag,
+      restrictions: this.spec.restrictions.map((r, j) => {
+        const couplings = [];
+        for (let n = slots.couplingStart[j]!; n < slots.couplingStart[j + 1]!; n += 1) {
+          couplings.push({
+            piston: slots.couplingPiston[n]!,
+            fromEnd: slots.couplingEnd[n] === 0,
+            exponent: slots.couplingExponent[n]!,
+            dvdx: slots.couplingDvdx[n]!,
+            slots: [slots.couplingSlots[2 * n]!, slots.couplingSlots[2 * n + 1]!] as const,
+          });
+        }
+        return {
+          r,
+          from: this.rFromNode[j]!,
+          to: this.rToNode[j]!,
+          fromFree: this.rFromFree[j] === 1,
+          toFree: this.rToFree[j] === 1,
+          slots: [slots.restriction[4 * j]!, slots.restriction[4 * j + 1]!, slots.restriction[4 * j + 2]!, slots.restriction[4 * j + 3]!] as const,
+          couplings,
+          modulator: restrictions[r]!.modulator ? ([slots.modulator[2 * j]!, slots.modulator[2 * j + 1]!] as const) : null,
+        };
+      }),
+      pistons: this.spec.pistons.map((k, j) => ({
+        k,
+        slots: [slots.piston[5 * j]!, slots.piston[5 * j + 1]!, slots.piston[5 * j + 2]!, slots.piston[5 * j + 3]!, slots.piston[5 * j + 4]!] as const,
+        hasRod: this.w.model.pistons[k]!.rodNode !== null,
+        dvdxCap: slots.pistonDvdx[2 * j]!,
+        dvdxRod: slots.pistonDvdx[2 * j + 1]!,
+      })),
+    };
+  }
+
   private buildPattern(loops: boolean): { lu: SparseLu; slots: Partition['slots'] } {
     const { restrictions, pistons, nodes } = this.w.model;
     const local = (node: number) => this.localOfNode.get(node)!;
@@ -1048,6 +1091,11 @@ export class Partition {
   private assembleW(h: number): void {
     const v = this.lu.values;
     const c = -GAMMA * h;
+    if (this.iterationMatrix) {
+      const m = this.iterationMatrix;
+      m.assemble(v, c, this.w, m.indices, m.numbers);
+      return;
+    }
     const w = this.w;
     const pressurePerMass = w.pressurePerMass;
     const pressure = w.pressure;

@@ -26,7 +26,7 @@ function expectSameBitForBit(document: CircuitDocument, inputs: readonly InputEv
 }
 
 describe('straight-line and loop forms of the solver', () => {
-  for (const name of ['lid-press-two-hand', 'lid-press-relay-control', 'carton-clamp-sequence', 'reject-gate-quick-exhaust']) {
+  for (const name of ['lid-press-two-hand', 'lid-press-two-hand-timed', 'lid-press-relay-control', 'carton-clamp-sequence', 'reject-gate-quick-exhaust']) {
     it(`give the same trace bit for bit: demo ${name}`, () => {
       expectSameBitForBit(demoDocument(name), demoInputs(name), 4);
     });
