@@ -44,12 +44,12 @@ const WRITTEN_LIMIT = 256;
  * same matrix bit for bit. Null where the platform forbids compiling code at run time.
  */
 export function straightLineIterationMatrix(shape: IterationMatrixShape): IterationMatrix | null {
-  const key = JSON.stringify({
-    n: shape.slotCount,
-    d: Array.from(shape.diagonal),
-    r: shape.restrictions.map((r) => [r.fromFree, r.toFree, r.slots, r.couplings.map((c) => [c.fromEnd, c.slots]), r.modulator]),
-    p: shape.pistons.map((p) => [p.slots, p.hasRod]),
-  });
+  let key = `${shape.slotCount}|${Array.prototype.join.call(shape.diagonal)}`;
+  for (const r of shape.restrictions) {
+    key += `|${r.fromFree ? 'f' : 'x'}${r.toFree ? 'f' : 'x'}${r.slots.join()}:${r.modulator ? r.modulator.join() : ''}`;
+    for (const c of r.couplings) key += `:${c.fromEnd ? 'a' : 'b'}${c.slots.join()}`;
+  }
+  for (const p of shape.pistons) key += `|${p.slots.join()}${p.hasRod ? 'r' : ''}`;
   let assemble = written.get(key);
   if (!assemble) {
     try {
