@@ -53,7 +53,7 @@ export function straightLineIterationMatrix(shape: IterationMatrixShape): Iterat
   let assemble = written.get(key);
   if (!assemble) {
     try {
-      assemble = new Function('v', 'c', 'w', 'ix', 'cs', body(shape)) as Written;
+      assemble = new Function('v', 'c', 'w', 'ix', 'cs', `${body(shape)}\n//# sourceURL=written-iteration-matrix.js`) as Written;
     } catch {
       return null;
     }

@@ -83,7 +83,7 @@ export function straightLineRightHandSide(shape: RightHandSideShape): RightHandS
 }
 
 function compiled(source: string): Written {
-  return new Function('y', 'f', 'w', 'ix', 'cs', source) as Written;
+  return new Function('y', 'f', 'w', 'ix', 'cs', `${source}\n//# sourceURL=written-right-hand-side.js`) as Written;
 }
 
 /** Everything the written code depends on besides the numbers in ix and cs. */

@@ -174,8 +174,8 @@ function straightLineKernels(l: Lists): Kernels | null {
   try {
     return {
       form: 'straight-line',
-      factor: new Function('v', 'ip', factor.join('\n')) as Kernels['factor'],
-      solve: new Function('b', 'v', 'ip', solve.join('\n')) as Kernels['solve'],
+      factor: new Function('v', 'ip', `${factor.join('\n')}\n//# sourceURL=written-lu-factor.js`) as Kernels['factor'],
+      solve: new Function('b', 'v', 'ip', `${solve.join('\n')}\n//# sourceURL=written-lu-solve.js`) as Kernels['solve'],
     };
   } catch {
     return null;
