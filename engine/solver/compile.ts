@@ -210,19 +210,46 @@ export function compile(document: CircuitDocument): CompileResult {
       addVolume: (ref, v) => {
         nodes[ref.node]!.volumeM3 += v;
       },
+      // Every field named, in one order, rather than spread from the component's spec: records of
+      // one shape keep the solver's reads of them monomorphic (spread copies of specs written by
+      // different component types had a dozen shapes, and every read of them went the slow way).
       restriction: (spec: RestrictionSpec) => {
         restrictions.push({
-          ...spec,
+          name: spec.name,
           owner: component.id,
           from: spec.from.node,
           to: spec.to.node,
+          conductance: spec.conductance,
+          criticalRatio: spec.criticalRatio,
+          oneWay: spec.oneWay,
+          crackingPa: spec.crackingPa,
           opening: spec.opening ?? 1,
           modulator: spec.modulator ? { control: spec.modulator.control.node, fn: spec.modulator.fn } : undefined,
         });
         return { restriction: restrictions.length - 1 };
       },
       piston: (spec: PistonSpec) => {
-        pistons.push({ ...spec, owner: component.id, capNode: spec.capNode.node, rodNode: spec.rodNode?.node ?? null });
+        pistons.push({
+          name: spec.name,
+          owner: component.id,
+          capNode: spec.capNode.node,
+          capArea: spec.capArea,
+          rodNode: spec.rodNode?.node ?? null,
+          rodSideArea: spec.rodSideArea,
+          ambientArea: spec.ambientArea,
+          strokeM: spec.strokeM,
+          deadVolumeCapM3: spec.deadVolumeCapM3,
+          deadVolumeRodM3: spec.deadVolumeRodM3,
+          movingMassKg: spec.movingMassKg,
+          loadN: spec.loadN,
+          coulombN: spec.coulombN,
+          breakawayN: spec.breakawayN,
+          viscousNsPerM: spec.viscousNsPerM,
+          springPreloadN: spec.springPreloadN,
+          springRateNPerM: spec.springRateNPerM,
+          startPositionM: spec.startPositionM,
+          polytropicExponent: spec.polytropicExponent,
+        });
         const index = pistons.length - 1;
         nodes[spec.capNode.node]!.chambers.push({ piston: index, side: 'cap' });
         if (spec.rodNode) nodes[spec.rodNode.node]!.chambers.push({ piston: index, side: 'rod' });
@@ -268,8 +295,10 @@ export function compile(document: CircuitDocument): CompileResult {
   return { model: { ambientPa, temperatureK, nodes, restrictions, pistons, behaviours, portNodes, componentIds, control, wireNets }, diagnostics };
 }
 
+/** Adds a node with every field present (holder and exponent perhaps undefined): one shape for all, as for passages and pistons. */
 function addNode(nodes: NodeModel[], node: NodeModel): number {
-  nodes.push(node);
+  const { name, volumeM3, fixed, fixedPressurePa, holder, chambers, polytropicExponent } = node;
+  nodes.push({ name, volumeM3, fixed, fixedPressurePa, holder, chambers, polytropicExponent });
   return nodes.length - 1;
 }
 

@@ -1015,13 +1015,16 @@ export class Partition {
     const lu = new SparseLu(this.nState, pairs, { loops });
     const diag = new Int32Array(this.nState);
     for (let i = 0; i < this.nState; i += 1) diag[i] = lu.slot(i, i);
-    const restriction = Int32Array.from(
-      this.spec.restrictions.flatMap((_, j) => {
-        const a = this.rowFrom[j]!;
-        const b = this.rowTo[j]!;
-        return [lu.slot(a, a), lu.slot(a, b), lu.slot(b, a), lu.slot(b, b)];
-      }),
-    );
+    // Four slots per passage: from-from, from-to, to-from, to-to.
+    const restriction = new Int32Array(4 * this.spec.restrictions.length);
+    for (let j = 0; j < this.spec.restrictions.length; j += 1) {
+      const a = this.rowFrom[j]!;
+      const b = this.rowTo[j]!;
+      restriction[4 * j] = lu.slot(a, a);
+      restriction[4 * j + 1] = lu.slot(a, b);
+      restriction[4 * j + 2] = lu.slot(b, a);
+      restriction[4 * j + 3] = lu.slot(b, b);
+    }
     // Volume couplings: a passage's flow depends on a chamber's pressure, which depends on its piston's position.
     const couplingStart = new Int32Array(this.spec.restrictions.length + 1);
     const couplingSlots: number[] = [];
@@ -1043,20 +1046,23 @@ export class Partition {
       });
       couplingStart[j + 1] = couplingPiston.length;
     });
-    const modulator = Int32Array.from(
-      this.spec.restrictions.flatMap((r, j) => {
-        const spec = restrictions[r]!;
-        return spec.modulator ? [lu.slot(this.rowFrom[j]!, local(spec.modulator.control)), lu.slot(this.rowTo[j]!, local(spec.modulator.control))] : [-1, -1];
-      }),
-    );
-    const piston = Int32Array.from(
-      this.spec.pistons.flatMap((k, j) => {
-        const p = pistons[k]!;
-        const x = this.xIndex[j]!;
-        const v = this.vIndex[j]!;
-        return [lu.slot(x, v), lu.slot(v, local(p.capNode)), p.rodNode === null ? -1 : lu.slot(v, local(p.rodNode)), lu.slot(v, x), lu.slot(v, v)];
-      }),
-    );
+    const modulator = new Int32Array(2 * this.spec.restrictions.length).fill(-1);
+    this.spec.restrictions.forEach((r, j) => {
+      const control = restrictions[r]!.modulator?.control;
+      if (control === undefined) return;
+      modulator[2 * j] = lu.slot(this.rowFrom[j]!, local(control));
+      modulator[2 * j + 1] = lu.slot(this.rowTo[j]!, local(control));
+    });
+    const piston = new Int32Array(5 * this.spec.pistons.length);
+    const pistonDvdx = new Float64Array(2 * this.spec.pistons.length);
+    this.spec.pistons.forEach((k, j) => {
+      const p = pistons[k]!;
+      const x = this.xIndex[j]!;
+      const v = this.vIndex[j]!;
+      piston.set([lu.slot(x, v), lu.slot(v, local(p.capNode)), p.rodNode === null ? -1 : lu.slot(v, local(p.rodNode)), lu.slot(v, x), lu.slot(v, v)], 5 * j);
+      pistonDvdx[2 * j] = this.dvdx(p.capNode, k);
+      pistonDvdx[2 * j + 1] = p.rodNode === null ? 0 : this.dvdx(p.rodNode, k);
+    });
     return {
       lu,
       slots: {
@@ -1070,7 +1076,7 @@ export class Partition {
         couplingExponent: Float64Array.from(couplingExponent),
         modulator,
         piston,
-        pistonDvdx: Float64Array.from(this.spec.pistons.flatMap((k) => [this.dvdx(pistons[k]!.capNode, k), pistons[k]!.rodNode === null ? 0 : this.dvdx(pistons[k]!.rodNode!, k)])),
+        pistonDvdx,
       },
     };
   }

@@ -79,7 +79,8 @@ export function straightLineRightHandSide(shape: RightHandSideShape): RightHandS
     functions = made;
   }
   fillNumbers(shape, ix, cs);
-  return { ...functions, indices: Int32Array.from(ix), numbers: Float64Array.from(cs) };
+  // Named fields rather than a spread: the partition reads them at every evaluation, and spread copies do not share a shape.
+  return { values: functions.values, withDerivatives: functions.withDerivatives, indices: Int32Array.from(ix), numbers: Float64Array.from(cs) };
 }
 
 function compiled(source: string): Written {
