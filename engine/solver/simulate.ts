@@ -253,7 +253,7 @@ class Run implements GuardSource, OutputRows, SteppedSimulation {
       if (this.partitionOfBehaviour[b]! >= 0) touched.add(this.partitionOfBehaviour[b]!);
       return Int32Array.from([...touched].sort((x, y) => x - y));
     });
-    this.queue = new TimeQueue(this.partitions.length, (i) => this.partitions[i]!.time);
+    this.queue = new TimeQueue(this.partitions);
     this.cap = new Float64Array(this.partitions.length);
     this.capDirty = new Uint8Array(this.partitions.length);
     this.crossTouch = this.partitions.map(() => []);

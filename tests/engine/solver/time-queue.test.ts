@@ -4,7 +4,13 @@ import { TimeQueue } from '@/engine/solver/time-queue';
 describe('TimeQueue', () => {
   it('always offers the partition furthest behind, ties to the lower index, as times move both ways', () => {
     const times = [0.5, 0.2, 0.2, 0.9, 0.1];
-    const queue = new TimeQueue(times.length, (i) => times[i]!);
+    // The queue reads each member's time as it is now, as it reads a partition's.
+    const members = times.map((_, i) => ({
+      get time() {
+        return times[i]!;
+      },
+    }));
+    const queue = new TimeQueue(members);
     expect(queue.top()).toBe(4);
     // Stepping forward: 4 passes everyone; 1 and 2 tie, the lower index first.
     times[4] = 1.2;
