@@ -79,6 +79,9 @@ const VELOCITY_TOLERANCE_M_PER_S = 1e-3;
  */
 const REST_DRIFT_PER_S = 0.05;
 
+/** Evaluations on the step's interpolant to locate a guard crossing before the step is taken again instead. */
+const LOCATE_EVALUATIONS = 4;
+
 /** First step after a discrete change, s. */
 const RESTART_STEP_S = 1e-5;
 
@@ -525,7 +528,7 @@ export class Partition {
       shortened = true;
     }
     for (;;) {
-      const landsOnStop = h >= stop - this.time - 1e-15;
+      let landsOnStop = h >= stop - this.time - 1e-15;
       const err = this.rosenbrock(h);
       if (err < 0 || err > 1) {
         this.rejected += 1;
@@ -538,15 +541,19 @@ export class Partition {
       // The owners stay as they are: only a discrete change (computeGuards) changes what guards there are.
       const after = this.spareGuards;
       this.collectGuards(after, null);
-      let theta = 1;
-      let crossed: number[] | null = null;
-      const before = this.guardValues;
-      for (let i = 0; i < after.length; i += 1) {
-        const g0 = before[i]!;
-        const g1 = after[i]!;
-        if ((g0 < 0 && g1 >= 0) || (g0 > 0 && g1 <= 0)) {
-          (crossed ??= []).push(i);
-          theta = Math.min(theta, g0 / (g0 - g1));
+      let { crossed, theta } = this.crossings(after);
+      if (crossed && (1 - theta) * h > EVENT_TOLERANCE_S && h > EVENT_TOLERANCE_S) {
+        // End the step just past the crossing on the interpolant when its guards agree, rather
+        // than taking the step again up to there.
+        const cut = this.locateOnInterpolant(h, after);
+        if (cut > 0) {
+          crossed = this.crossings(after).crossed;
+          // Located: the step ends on the crossing, nothing is left to cut.
+          theta = 1;
+          located = Math.max(located, h);
+          h = cut;
+          landsOnStop = h >= stop - this.time - 1e-15;
+          shortened = true;
         }
       }
       if (crossed && (1 - theta) * h > EVENT_TOLERANCE_S && h > EVENT_TOLERANCE_S) {
@@ -596,6 +603,84 @@ export class Partition {
       this.time = end;
       return 'quiescent';
     }
+  }
+
+  /** The guards that changed sign between the committed values and `after`, and the earliest linear-interpolated crossing (fraction of the step). */
+  private crossings(after: readonly number[]): { crossed: number[] | null; theta: number } {
+    let theta = 1;
+    let crossed: number[] | null = null;
+    const before = this.guardValues;
+    for (let i = 0; i < after.length; i += 1) {
+      const g0 = before[i]!;
+      const g1 = after[i]!;
+      if ((g0 < 0 && g1 >= 0) || (g0 > 0 && g1 <= 0)) {
+        (crossed ??= []).push(i);
+        theta = Math.min(theta, g0 / (g0 - g1));
+      }
+    }
+    return { crossed, theta };
+  }
+
+  /**
+   * Finds where the guards first cross within a step of size h that passed the error test, on the
+   * cubic Hermite interpolant through both ends and their rates (by false position, a few
+   * evaluations at most), and leaves the candidate, the world and `after` at a state just past
+   * it; returns that step size, or 0 when it is not found close enough (the caller then takes
+   * the step again up to the crossing). The interpolant's error is of order h⁴, the order of the
+   * method's own local error, and it keeps the air budget: over the masses and the boundaries'
+   * accounts the two ends' weights sum to one and each rate vector sums to zero.
+   */
+  private locateOnInterpolant(h: number, after: number[]): number {
+    const n = this.nState;
+    const y0 = this.y;
+    const f0 = this.f;
+    // The end of the step and its rates move to the stage vectors, free until the next attempt.
+    const y1 = this.stage;
+    const f1 = this.fStage;
+    y1.set(this.candidate);
+    f1.set(this.fCandidate);
+    let lo = 0;
+    let hi = 1;
+    let gLo = this.guardValues.slice();
+    let gHi = after.slice();
+    for (let evaluation = 0; evaluation < LOCATE_EVALUATIONS; evaluation += 1) {
+      let root = hi;
+      for (let i = 0; i < gHi.length; i += 1) {
+        const a = gLo[i]!;
+        const b = gHi[i]!;
+        if ((a < 0 && b >= 0) || (a > 0 && b <= 0)) root = Math.min(root, lo + ((hi - lo) * a) / (a - b));
+      }
+      const s = Math.min(root + (0.5 * EVENT_TOLERANCE_S) / h, hi);
+      const s2 = s * s;
+      const s3 = s2 * s;
+      const w10 = (s3 - 2 * s2 + s) * h;
+      const w01 = -2 * s3 + 3 * s2;
+      const w11 = (s3 - s2) * h;
+      const y = this.candidate;
+      // y0 + w01·(y1 − y0) rather than (1 − w01)·y0 + w01·y1: a state that does not move (a piston
+      // resting on its stop) keeps its value to the last bit.
+      for (let i = 0; i < n; i += 1) y[i] = y0[i]! + w01 * (y1[i]! - y0[i]!) + w10 * f0[i]! + w11 * f1[i]!;
+      this.writePositions(y);
+      if (!this.evaluate(y, this.fCandidate, true)) return 0;
+      this.collectGuards(after, null);
+      const { crossed, theta } = this.crossings(after);
+      const cut = s * h;
+      if (crossed && !((1 - theta) * cut > EVENT_TOLERANCE_S && cut > EVENT_TOLERANCE_S)) return cut;
+      let crossedHere = false;
+      for (let i = 0; i < after.length && !crossedHere; i += 1) {
+        const a = gLo[i]!;
+        const b = after[i]!;
+        crossedHere = (a < 0 && b >= 0) || (a > 0 && b <= 0);
+      }
+      if (crossedHere) {
+        hi = s;
+        gHi = after.slice();
+      } else {
+        lo = s;
+        gLo = after.slice();
+      }
+    }
+    return 0;
   }
 
   /**
