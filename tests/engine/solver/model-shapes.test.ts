@@ -18,7 +18,7 @@ function shapes(records: readonly object[]): string[] {
 
 // The solver reads passages, pistons and nodes in its inner loops; records that all have the same
 // fields in the same order share one hidden class in a JavaScript engine, and its reads of them
-// stay on the fast path. Records spread from the component types' own specs had a dozen shapes.
+// stay on the fast path; records spread from the component types' own specs did not.
 describe('the compiled model', () => {
   const models = [
     ...['lid-press-two-hand', 'lid-press-two-hand-timed', 'lid-press-relay-control', 'carton-clamp-sequence', 'reject-gate-quick-exhaust'].map((name) => modelOf(demoDocument(name))),
