@@ -5,7 +5,7 @@ import { documentOf } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
 import { estimateS, progressWriter } from '@/lib/jobs/progress-writer';
 import { FAULT_SEARCH_QUEUE, workQueue, type FaultSearchJob, type QueueWorker } from '@/lib/jobs/queue';
-import { claimFaultSearch, failFaultSearch, keepCancelledFaultSearch, recordFaultSearchResult, writeFaultSearchProgress } from '@/lib/replays/fault-search-records';
+import { claimFaultSearch, failFaultSearch, keepCancelledFaultSearch, readFaultSearchStatus, recordFaultSearchResult, writeFaultSearchProgress } from '@/lib/replays/fault-search-records';
 import type { FaultSearchProgress } from '@/lib/replays/fault-searches';
 import { createFaultTaskPool, type FaultTaskPool } from '@/lib/replays/fault-task-pool';
 import { recordedLogOf } from '@/lib/replays/recorded-log';
@@ -27,7 +27,10 @@ async function workFaultSearch(faultSearchId: string, { pool, isStopping }: { po
     const log = await recordedLogOf({ upload, mapping: search.mapping as ColumnMapping, document });
 
     const startedAt = Date.now();
-    const progress = progressWriter((p: FaultSearchProgress) => writeFaultSearchProgress(search.id, p), `fault search ${search.id}`);
+    const progress = progressWriter(
+      { write: (p: FaultSearchProgress) => writeFaultSearchProgress(search.id, p), readStatus: () => readFaultSearchStatus(search.id) },
+      `fault search ${search.id}`,
+    );
     const onProgress = (p: EngineProgress): void => progress.report(withEstimate(p, startedAt));
 
     const result = await faultSearch(document, log, { onProgress, shouldStop: () => progress.cancelled || isStopping(), ...(pool ? { runBatch: (tasks) => pool.runBatch(tasks) } : {}) });

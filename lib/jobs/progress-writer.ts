@@ -10,28 +10,31 @@ export function estimateS(done: number, total: number, elapsedS: number): number
 }
 
 /**
- * Passes a search's progress to its row at most every PROGRESS_WRITE_MS, one write at a time, and
- * learns from each write whether the row was cancelled meanwhile (the search asks `cancelled`
- * between batches). `settle()` waits for a write still under way.
+ * Passes a search's progress to its row at most every PROGRESS_WRITE_MS and learns whether the row
+ * was cancelled meanwhile (the search asks `cancelled` between batches). A report that comes
+ * sooner than the next write only reads the status: a cancel then stops the search within a
+ * batch or two instead of waiting for the next write, which a short search may never reach.
+ * One database call at a time; `settle()` waits for one still under way.
  */
-export function progressWriter<P>(write: (progress: P) => Promise<JobStatus>, what: string) {
+export function progressWriter<P>({ write, readStatus }: { write: (progress: P) => Promise<JobStatus>; readStatus: () => Promise<JobStatus> }, what: string) {
   let cancelled = false;
   let latest: P | null = null;
   let lastWriteAt = 0;
-  let writing: Promise<void> | null = null;
+  let pending: Promise<void> | null = null;
   return {
     report(progress: P): void {
       latest = progress;
+      if (pending || cancelled) return;
       const now = Date.now();
-      if (writing || now - lastWriteAt < PROGRESS_WRITE_MS) return;
-      lastWriteAt = now;
-      writing = write(progress)
+      const writing = now - lastWriteAt >= PROGRESS_WRITE_MS;
+      if (writing) lastWriteAt = now;
+      pending = (writing ? write(progress) : readStatus())
         .then((status) => {
           cancelled = status === 'cancelled';
         })
-        .catch((error: unknown) => console.error(`[airproof] could not write the progress of ${what}`, error))
+        .catch((error: unknown) => console.error(`[airproof] could not ${writing ? 'write the progress' : 'read the status'} of ${what}`, error))
         .finally(() => {
-          writing = null;
+          pending = null;
         });
     },
     get cancelled(): boolean {
@@ -41,7 +44,7 @@ export function progressWriter<P>(write: (progress: P) => Promise<JobStatus>, wh
       return latest;
     },
     async settle(): Promise<void> {
-      await writing;
+      await pending;
     },
   };
 }

@@ -5,7 +5,7 @@ import { documentOf } from '@/lib/circuits/revision-view';
 import { getSequelize } from '@/lib/db';
 import { estimateS, progressWriter } from '@/lib/jobs/progress-writer';
 import { PROOF_QUEUE, workQueue, type ProofJob, type QueueWorker } from '@/lib/jobs/queue';
-import { claimProof, failProof, keepCancelledResult, recordProofResult, writeProgress } from '@/lib/proofs/proof-records';
+import { claimProof, failProof, keepCancelledResult, readProofStatus, recordProofResult, writeProgress } from '@/lib/proofs/proof-records';
 import type { ProofProgress } from '@/lib/proofs/proofs';
 import { createTaskPool } from '@/lib/proofs/task-pool';
 import { CircuitRevision } from '@/models';
@@ -27,7 +27,7 @@ async function workProof(proofId: string, { runBatch, isStopping }: { runBatch: 
     if (errors.length) throw new Error(`the rules no longer bind to revision ${revision.number}: line ${errors[0]!.line}, column ${errors[0]!.column}: ${errors[0]!.message}`);
     const lines = new Map(rules.map((rule) => [rule.name, rule.line]));
 
-    const progress = progressWriter((p: ProofProgress) => writeProgress(proof.id, p), `proof ${proof.id}`);
+    const progress = progressWriter({ write: (p: ProofProgress) => writeProgress(proof.id, p), readStatus: () => readProofStatus(proof.id) }, `proof ${proof.id}`);
     const onProgress = (p: SearchProgress): void => progress.report(withEstimate(p));
 
     const result = await runProofSearch(

@@ -32,6 +32,13 @@ export async function writeProgress(proofId: string, progress: ProofProgress): P
   return rows[0]?.status ?? 'cancelled';
 }
 
+/** The proof's status, read between progress writes so that a cancel is seen soon. */
+export async function readProofStatus(proofId: string): Promise<JobStatus> {
+  getSequelize();
+  const row = await Proof.findByPk(proofId, { attributes: ['status'] });
+  return row?.status ?? 'cancelled';
+}
+
 export async function failProof(proofId: string, error: string): Promise<void> {
   getSequelize();
   await Proof.update({ status: 'failed', error, finishedAt: new Date() }, { where: { id: proofId, status: ['queued', 'running'] } });

@@ -18,6 +18,13 @@ export async function writeFaultSearchProgress(faultSearchId: string, progress: 
   return rows[0]?.status ?? 'cancelled';
 }
 
+/** The search's status, read between progress writes so that a cancel is seen soon. */
+export async function readFaultSearchStatus(faultSearchId: string): Promise<JobStatus> {
+  getSequelize();
+  const row = await FaultSearch.findByPk(faultSearchId, { attributes: ['status'] });
+  return row?.status ?? 'cancelled';
+}
+
 export async function failFaultSearch(faultSearchId: string, error: string): Promise<void> {
   getSequelize();
   await FaultSearch.update({ status: 'failed', error, finishedAt: new Date() }, { where: { id: faultSearchId, status: ['queued', 'running'] } });

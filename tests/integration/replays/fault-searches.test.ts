@@ -79,7 +79,8 @@ describe('fault searches', () => {
     const cancelled = await cancel(json.id);
     expect(cancelled.status).toBe(200);
     expect(cancelled.json.status).toBe('cancelled');
-    // The worker sees the cancel at its next progress write (0.5 s) and writes what it has.
+    // The worker reads the status after each batch of simulations, so it sees the cancel a batch or
+    // two later, long before the search's last batch, and writes what it has.
     const kept = await until(json.id, (s) => s.result !== null, 10_000);
     expect(kept.status).toBe('cancelled');
     expect(kept.result!.complete).toBe(false);
